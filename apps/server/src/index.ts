@@ -1,0 +1,13 @@
+export { createApp } from './app';
+export { loadConfig, ConfigError } from './config';
+export type { Config } from './config';
+export { createDataSource, entities, migrations } from './db/data-source';
+export { Database } from './db/database';
+export { loadDemoData } from './demo/load-demo-data';
+export { demoIdentities } from './dev/demo-identities';
+export { LOCAL_CLIENT_ID, LOCAL_CLIENT_SECRET, startDevServices } from './dev/dev-services';
+export { PortTakenError } from './http/listen';
+export { createLogger } from './logger';
+export { startServer } from './server';
+export type { RunningServer } from './server';
+export { User, USER_ROLES } from './entities/user.entity';

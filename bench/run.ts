@@ -1,0 +1,15 @@
+import { mkdirSync, writeFileSync } from 'node:fs';
+import os from 'node:os';
+import { verifySuite } from './suites/verify';
+
+// CAIRN_BENCH_MAX_TIME (seconds per case) trades precision for time; benchmark.js defaults to 5.
+const maxTime = Number(process.env.CAIRN_BENCH_MAX_TIME ?? 2);
+const results = {
+  recordedAt: new Date().toISOString(),
+  machine: { cpus: os.cpus().length, cpuModel: os.cpus()[0]?.model ?? 'unknown', node: process.version, memoryGiB: Math.round(os.totalmem() / 2 ** 30) },
+  suites: { verify: verifySuite(maxTime) },
+};
+const dir = new URL('./results/', import.meta.url);
+mkdirSync(dir, { recursive: true });
+writeFileSync(new URL('engine.json', dir), `${JSON.stringify(results, null, 2)}\n`);
+process.stdout.write('figures written to bench/results/engine.json\n');

@@ -1,0 +1,2 @@
+export { HealthResponse } from './health';
+export { ApiError } from './api-error';

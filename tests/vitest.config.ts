@@ -1,0 +1,14 @@
+import { defineConfig } from 'vitest/config';
+import { sourceConditions } from '../vitest.shared.ts';
+
+// One file at a time: the files share the test database and start real servers.
+export default defineConfig({
+  ...sourceConditions,
+  test: {
+    include: ['integration/**/*.test.ts', 'e2e/**/*.test.ts'],
+    globalSetup: ['support/global-setup.ts'],
+    fileParallelism: false,
+    testTimeout: 60_000,
+    hookTimeout: 60_000,
+  },
+});
