@@ -1,5 +1,10 @@
+export { EngineError, LabelError, ParseError, SizeError, SpecError } from './errors';
+export type { TextPosition } from './errors';
 export { Graph } from './graph/graph';
-export { graphFromEdges } from './graph/from-edges';
+export type { Family, GridLayout, MaskShape } from './graph/family';
+export { checkVertexCount, graphFromEdges } from './graph/from-edges';
+export { MAX_EDGES, MAX_VERTICES } from './graph/limits';
 export { pathGraph } from './families/path';
 export { verifyRanking } from './ranking/verify';
 export type { RankingVerdict, RankingViolation } from './ranking/verify';
+export * from './io/index';
