@@ -1,10 +1,58 @@
+// @cairn/engine: the public surface. See packages/engine/README.md for an example per function.
 export { EngineError, LabelError, ParseError, SizeError, SpecError } from './errors';
 export type { TextPosition } from './errors';
+
 export { Graph } from './graph/graph';
 export type { Family, GridLayout, MaskShape } from './graph/family';
+export { Bitset } from './graph/bitset';
+export { componentIds, componentsOf } from './graph/components';
 export { checkVertexCount, graphFromEdges } from './graph/from-edges';
 export { MAX_EDGES, MAX_VERTICES } from './graph/limits';
-export { pathGraph } from './families/path';
+
+export { gridGraph } from './families/grid';
+export { cylinderGraph } from './families/cylinder';
+export { torusGraph } from './families/torus';
+export { maskGraph } from './families/mask';
+export { staircaseGraph } from './families/staircase';
+export { completeBipartiteGraph, completeGraph, cycleGraph, pathGraph, starGraph } from './families/classic';
+export { randomTree, treeFromParents } from './families/tree';
+export { randomGraph } from './families/random-graph';
+export { seededRandom } from './families/seeded-random';
+
+export type { GraphSpec, GraphSpecFamily } from './spec/graph-spec';
+export { SPEC_FAMILIES } from './spec/graph-spec';
+export { formatGraphSpec, parseGraphSpec } from './spec/parse-spec';
+export { graphFromSpec, readGraphSpec } from './spec/graph-from-spec';
+export type { FileLoader } from './spec/graph-from-spec';
+export { parseParentArray } from './spec/parent-array-text';
+
 export { verifyRanking } from './ranking/verify';
 export type { RankingVerdict, RankingViolation } from './ranking/verify';
+export { isMinimalRanking } from './ranking/minimal';
+export type { MinimalityVerdict } from './ranking/minimal';
+export { normalizeLabels } from './ranking/normalize';
+export { eliminationForest } from './ranking/elimination-forest';
+export { eliminationOrder, stepPlan } from './ranking/step-plan';
+export type { PlanStep } from './ranking/step-plan';
+
 export * from './io/index';
+
+export {
+  CLOSED_FORMS,
+  completeBipartiteRankNumber,
+  completeMultipartiteRankNumber,
+  completeRankNumber,
+  cycleRankNumber,
+  floorLog2,
+  grid2RankNumber,
+  pathRankNumber,
+  starRankNumber,
+} from './formulas/closed-forms';
+export type { ClosedForm } from './formulas/closed-forms';
+export { formulaFor } from './formulas/formula-for';
+export type { FormulaValue } from './formulas/formula-for';
+export type { FormulaSource } from './formulas/sources';
+
+export { optimalTreeRanking } from './bounds/tree-ranking';
+export { MidlineSplit, midlineSplitRanking } from './bounds/midline-split';
+export type { UpperBound } from './bounds/upper-bound';

@@ -1,76 +1,53 @@
+import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { graphFromEdges, pathGraph, verifyRanking } from '../src/index';
-
-/** The ruler labelling of P_n: vertex i gets 1 + the number of trailing zero bits of i + 1. */
-function rulerLabels(n: number): number[] {
-  return Array.from({ length: n }, (_, i) => 1 + Math.log2((i + 1) & -(i + 1)));
-}
-
-/** Brute force straight from the definition: search every simple path that starts at a vertex. */
-function isRankingByDefinition(n: number, pairs: number[], labels: number[]): boolean {
-  const adj: number[][] = Array.from({ length: n }, () => []);
-  for (let i = 0; i < pairs.length; i += 2) {
-    const [u, v] = [pairs[i]!, pairs[i + 1]!];
-    if (u !== v && !adj[u]!.includes(v)) {
-      adj[u]!.push(v);
-      adj[v]!.push(u);
-    }
-  }
-  const onPath = new Array<boolean>(n).fill(false);
-  const walk = (start: number, x: number, maxInside: number): boolean => {
-    onPath[x] = true;
-    for (const w of adj[x]!) {
-      if (onPath[w]) continue;
-      if (labels[w] === labels[start] && maxInside <= labels[start]!) return false;
-      if (!walk(start, w, Math.max(maxInside, labels[w]!))) return false;
-    }
-    onPath[x] = false;
-    return true;
-  };
-  for (let s = 0; s < n; s++) {
-    onPath.fill(false);
-    if (!walk(s, s, 0)) return false;
-  }
-  return true;
-}
+import { graphFromEdges, gridGraph, LabelError, pathGraph, verifyRanking } from '../src/index';
+import { adjacency, arbitraryGraph, isRankingByDefinition, rulerLabels, toGraph } from './support';
 
 describe('verifyRanking', () => {
-  it('accepts the ruler labelling of P_n with floor(log2 n) + 1 labels (Bodlaender et al., SIAM J. Discrete Math. 1998)', () => {
-    for (let n = 1; n <= 200; n++) {
-      const verdict = verifyRanking(pathGraph(n), rulerLabels(n));
-      expect(verdict).toMatchObject({ valid: true, labelsUsed: Math.floor(Math.log2(n)) + 1 });
+  it('accepts the ruler labelling of P_n with floor(log2 n) + 1 labels (Bodlaender et al., "Rankings of graphs", SIAM J. Discrete Math. 1998)', () => {
+    for (let n = 1; n <= 300; n++) {
+      expect(verifyRanking(pathGraph(n), rulerLabels(n))).toMatchObject({ valid: true, labelsUsed: Math.floor(Math.log2(n)) + 1 });
     }
   });
 
-  it('names two equal labels and the path of smaller labels between them', () => {
+  it('names two equal labels and a path between them whose inner labels are all smaller', () => {
     const g = pathGraph(5);
-    const verdict = verifyRanking(g, [2, 1, 3, 1, 2]);
-    expect(verdict.valid).toBe(true);
+    expect(verifyRanking(g, [2, 1, 3, 1, 2]).valid).toBe(true);
     const bad = verifyRanking(g, [3, 1, 2, 1, 3]);
-    expect(bad.valid).toBe(false);
+    expect(bad).toMatchObject({ valid: false, labelsUsed: 3, violation: { label: 3 } });
     if (bad.valid) return;
-    expect(bad.violation.label).toBe(3);
-    const { u, v, path } = bad.violation;
-    expect([u, v].sort()).toEqual([0, 4]);
-    expect(path).toEqual(u === 0 ? [0, 1, 2, 3, 4] : [4, 3, 2, 1, 0]);
-    const adjacent = verifyRanking(g, [2, 1, 1, 3, 1]);
-    expect(adjacent).toMatchObject({ valid: false, violation: { label: 1 } });
+    expect([bad.violation.u, bad.violation.v].sort()).toEqual([0, 4]);
+    expect(bad.violation.path.length).toBe(5);
   });
 
-  it('agrees with a search over every simple path on small random graphs', () => {
-    let seed = 12345;
-    const rand = (k: number) => {
-      seed = (seed * 1103515245 + 12345) % 2147483648;
-      return seed % k;
-    };
-    for (let trial = 0; trial < 400; trial++) {
-      const n = 1 + rand(7);
-      const pairs: number[] = [];
-      for (let u = 0; u < n; u++) for (let v = u + 1; v < n; v++) if (rand(2)) pairs.push(u, v);
-      const labels = Array.from({ length: n }, () => 1 + rand(4));
-      const verdict = verifyRanking(graphFromEdges(n, pairs), labels);
-      expect(verdict.valid, `n=${n} edges=${pairs} labels=${labels}`).toBe(isRankingByDefinition(n, pairs, labels));
-    }
+  it('picks a clash with smaller inner labels even when a third equal label sits between', () => {
+    // 0 - 1 - 2 with labels 1 1 1: the reported pair must be adjacent, not 0 and 2 through 1.
+    const verdict = verifyRanking(pathGraph(3), [1, 1, 1]);
+    if (verdict.valid) throw new Error('expected a violation');
+    expect(verdict.violation.path).toHaveLength(2);
+  });
+
+  it('agrees with the definition read literally on 2000 random graphs and labellings (fast-check)', () => {
+    fc.assert(
+      fc.property(
+        arbitraryGraph(9).chain(([n, pairs]) => fc.tuple(fc.constant(n), fc.constant(pairs), fc.array(fc.integer({ min: 1, max: 5 }), { minLength: n, maxLength: n }))),
+        ([n, pairs, labels]) => {
+          const g = toGraph([n, pairs]);
+          const verdict = verifyRanking(g, labels);
+          expect(verdict.valid).toBe(isRankingByDefinition(adjacency(n, pairs), labels));
+          if (!verdict.valid) {
+            const { u, v, path, label } = verdict.violation;
+            expect(labels[u]).toBe(label);
+            expect(labels[v]).toBe(label);
+            expect(path[0]).toBe(u);
+            expect(path[path.length - 1]).toBe(v);
+            for (let i = 1; i < path.length; i++) expect(g.hasEdge(path[i - 1]!, path[i]!)).toBe(true);
+            for (const x of path.slice(1, -1)) expect(labels[x]).toBeLessThan(label);
+          }
+        },
+      ),
+      { numRuns: 2000 },
+    );
   });
 
   it('reads labels far larger than the vertex count the same way', () => {
@@ -79,8 +56,22 @@ describe('verifyRanking', () => {
     expect(verifyRanking(pathGraph(3), [2e9, 1e9, 2e9]).valid).toBe(false);
   });
 
-  it('rejects labels that are not whole numbers >= 1', () => {
+  it('treats labels that are not one whole number >= 1 per vertex as a LabelError, not a verdict', () => {
+    expect(() => verifyRanking(pathGraph(3), [1, 0, 1])).toThrow(LabelError);
     expect(() => verifyRanking(pathGraph(3), [1, 0, 1])).toThrow(/vertex 1/);
     expect(() => verifyRanking(pathGraph(3), [1, 2])).toThrow(/expected 3 labels/);
+    expect(() => verifyRanking(pathGraph(2), [1, 1.5])).toThrow(LabelError);
+    expect(() => verifyRanking(pathGraph(2), [1, Number.NaN])).toThrow(LabelError);
+  });
+
+  it('checks an empty graph and a graph without edges', () => {
+    expect(verifyRanking(graphFromEdges(0, []), [])).toMatchObject({ valid: true, labelsUsed: 0 });
+    expect(verifyRanking(graphFromEdges(3, []), [1, 1, 1])).toMatchObject({ valid: true, labelsUsed: 1 });
+  });
+
+  it('rejects the all-ones labelling of a grid at an edge', () => {
+    const g = gridGraph(3, 3);
+    const verdict = verifyRanking(g, new Array(9).fill(1));
+    expect(verdict.valid).toBe(false);
   });
 });

@@ -1,2 +1,3 @@
 export { HealthResponse } from './health';
 export { ApiError } from './api-error';
+export { GraphSpec, MAX_GRAPH_VERTICES } from './graph-spec';

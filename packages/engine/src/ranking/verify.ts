@@ -1,105 +1,96 @@
 import type { Graph } from '../graph/graph';
+import { orderByLabel } from './label-order';
 
-/** Why a labelling is not a ranking: two vertices with one label joined by a path of no larger label. */
+/** Why a labelling is not a ranking: two vertices with label `label` joined by a path of smaller labels. */
 export interface RankingViolation {
   label: number;
   u: number;
   v: number;
-  /** The vertices of the offending path from u to v, both ends included. */
+  /** The vertices of the offending path from u to v, both ends included; the inner ones are all below `label`. */
   path: number[];
 }
 
 export type RankingVerdict =
   | { valid: true; labelsUsed: number; maxLabel: number }
-  | { valid: false; violation: RankingViolation };
+  | { valid: false; labelsUsed: number; maxLabel: number; violation: RankingViolation };
 
 /**
  * Decides whether labels is a ranking of g: every path between two vertices with the same label passes a
- * larger label. Labels are processed in ascending order and merged with union-find: a ranking is exactly a
- * labelling in which no component of the subgraph induced by labels <= l holds two vertices labelled l
- * (common practice). O((V + E) * alpha) after sorting the vertices by label.
+ * larger label. Labels are taken in ascending order and merged with union-find: a labelling is a ranking
+ * exactly when no component of the subgraph induced by the labels <= l holds two vertices labelled l
+ * (common practice), that is, when adding the vertices labelled l never joins two sets that each hold one. O((V + E) * alpha(V)) after a counting sort of the labels. Labels that are not one
+ * positive whole number per vertex are a LabelError, not a verdict.
  */
 export function verifyRanking(g: Graph, labels: ArrayLike<number>): RankingVerdict {
   const n = g.vertexCount;
-  if (labels.length !== n) throw new RangeError(`expected ${n} labels, got ${labels.length}`);
-  let top = 0;
-  for (let v = 0; v < n; v++) {
-    const l = labels[v]!;
-    if (!Number.isInteger(l) || l < 1) throw new RangeError(`label of vertex ${v} must be a whole number >= 1, got ${l}`);
-    if (l > top) top = l;
-  }
-  const order = verticesByLabel(labels, top);
-  const parent = new Int32Array(n).fill(-1); // -1: not yet added
-  const find = (x: number): number => {
-    let r = x;
-    while (parent[r] !== r) r = parent[r]!;
-    while (parent[x] !== r) {
-      const next = parent[x]!;
-      parent[x] = r;
-      x = next;
-    }
-    return r;
-  };
-  const holder = new Int32Array(n).fill(-1); // root -> a vertex labelled with the current label in that component
-  let labelsUsed = 0;
-  for (let start = 0; start < n; ) {
-    const label = labels[order[start]!]!;
-    let end = start;
-    while (end < n && labels[order[end]!] === label) end++;
-    labelsUsed++;
-    for (let i = start; i < end; i++) parent[order[i]!] = order[i]!;
+  const { order, groupEnds, top, distinct } = orderByLabel(g, labels);
+  const label = labels instanceof Int32Array ? labels : Int32Array.from(labels); // one array kind: monomorphic loops
+  const { offsets, targets } = g;
+  // Union-find inlined (the hot loop of the whole engine): parent -1 is not yet added, roots point to
+  // themselves; path halving and union by size. stamp[root] === l marks a set that already
+  // holds a vertex labelled l: joining two such sets is the violation.
+  const parent = new Int32Array(n).fill(-1);
+  const stamp = new Int32Array(n);
+  const size = new Uint32Array(n);
+  for (let k = 0, start = 0; k < groupEnds.length; k++) {
+    const end = groupEnds[k]!;
+    const l = label[order[start]!]!;
     for (let i = start; i < end; i++) {
       const v = order[i]!;
-      for (const w of g.neighbours(v)) {
-        if (parent[w] === -1) continue;
-        const a = find(v);
-        const b = find(w);
-        if (a !== b) parent[a] = b;
-      }
+      parent[v] = v;
+      stamp[v] = l;
+      size[v] = 1;
     }
     for (let i = start; i < end; i++) {
       const v = order[i]!;
-      const root = find(v);
-      const other = holder[root]!;
-      if (other >= 0 && labels[other] === label) {
-        return { valid: false, violation: { label, u: other, v, path: pathWithin(g, labels, label, other, v) } };
+      let rv = v;
+      while (parent[rv] !== rv) rv = parent[rv] = parent[parent[rv]!]!;
+      for (let e = offsets[v]!, stop = offsets[v + 1]!; e < stop; e++) {
+        let rw = targets[e]!;
+        if (parent[rw] === -1) continue;
+        while (parent[rw] !== rw) rw = parent[rw] = parent[parent[rw]!]!;
+        if (rw === rv) continue;
+        if (stamp[rw] === l) {
+          return { valid: false, labelsUsed: distinct, maxLabel: top, violation: nearestClash(g, label, l, v) };
+        }
+        // Union by size keeps the trees shallow; the joined set holds v, so it carries the stamp.
+        if (size[rw]! > size[rv]!) {
+          parent[rv] = rw;
+          size[rw]! += size[rv]!;
+          stamp[rw] = l;
+          rv = rw;
+        } else {
+          parent[rw] = rv;
+          size[rv]! += size[rw]!;
+        }
       }
-      holder[root] = v;
     }
     start = end;
   }
-  const maxLabel = n === 0 ? 0 : labels[order[n - 1]!]!;
-  return { valid: true, labelsUsed, maxLabel };
+  return { valid: true, labelsUsed: distinct, maxLabel: top };
 }
 
-/** The vertices in ascending label order: a counting sort when the labels are small, as rankings' are. */
-function verticesByLabel(labels: ArrayLike<number>, top: number): Uint32Array {
-  const n = labels.length;
-  if (top > 4 * n + 1024) return Uint32Array.from({ length: n }, (_, i) => i).sort((a, b) => labels[a]! - labels[b]!);
-  const start = new Uint32Array(top + 2);
-  for (let v = 0; v < n; v++) start[labels[v]! + 1]!++;
-  for (let l = 1; l <= top + 1; l++) start[l]! += start[l - 1]!;
-  const order = new Uint32Array(n);
-  for (let v = 0; v < n; v++) order[start[labels[v]!]!++] = v;
-  return order;
-}
-
-/** A shortest path from u to v through vertices labelled at most `label` (breadth-first search). */
-function pathWithin(g: Graph, labels: ArrayLike<number>, label: number, u: number, v: number): number[] {
+/**
+ * From v, a shortest path to another vertex with v's label whose inner vertices are all below it
+ * (breadth-first search through smaller labels). One exists whenever v's component of the subgraph
+ * of labels <= label holds another vertex labelled `label`: the nearest one is reached that way.
+ */
+function nearestClash(g: Graph, labels: ArrayLike<number>, label: number, v: number): RankingViolation {
   const prev = new Int32Array(g.vertexCount).fill(-1);
-  prev[u] = u;
-  const queue = [u];
+  prev[v] = v;
+  const queue = [v];
   for (let head = 0; head < queue.length; head++) {
     const x = queue[head]!;
-    if (x === v) break;
     for (const w of g.neighbours(x)) {
-      if (prev[w] === -1 && labels[w]! <= label) {
-        prev[w] = x;
-        queue.push(w);
+      if (prev[w] !== -1 || labels[w]! > label) continue;
+      prev[w] = x;
+      if (labels[w] === label) {
+        const path = [w];
+        for (let y = w; y !== v; y = prev[y]!) path.push(prev[y]!);
+        return { label, u: v, v: w, path: path.reverse() };
       }
+      queue.push(w);
     }
   }
-  const path = [v];
-  for (let x = v; x !== u; x = prev[x]!) path.push(prev[x]!);
-  return path.reverse();
+  throw new Error('unreachable: a clash was found by union-find but not by search');
 }

@@ -1,0 +1,81 @@
+import { describe, expect, it } from 'vitest';
+import { cycleGraph, EngineError, graphFromEdges, optimalTreeRanking, pathGraph, randomTree, starGraph, treeFromParents, verifyRanking } from '../src/index';
+import { bruteForceTreeDepth } from './brute-force-td';
+
+/** Every parent array with parent[v] < v: each unlabelled tree on n vertices appears among them. */
+function* recursiveTrees(n: number): Generator<number[]> {
+  const parent = new Array<number>(n).fill(-1);
+  function* fill(v: number): Generator<number[]> {
+    if (v === n) {
+      yield parent.slice();
+      return;
+    }
+    for (let p = 0; p < v; p++) {
+      parent[v] = p;
+      yield* fill(v + 1);
+    }
+  }
+  yield* fill(1);
+}
+
+/** A canonical string of the unrooted tree (AHU encoding from its centre or centres), to skip repeats. */
+function canonicalTree(parent: number[]): string {
+  const n = parent.length;
+  const adj: number[][] = Array.from({ length: n }, () => []);
+  parent.forEach((p, v) => p >= 0 && (adj[p]!.push(v), adj[v]!.push(p)));
+  const degree = adj.map((a) => a.length);
+  let layer = degree.flatMap((d, v) => (d <= 1 ? [v] : []));
+  let left = n;
+  while (left > 2) {
+    left -= layer.length;
+    const next: number[] = [];
+    for (const v of layer) for (const w of adj[v]!) if (--degree[w]! === 1) next.push(w);
+    layer = next;
+  }
+  const encode = (v: number, from: number): string => `(${adj[v]!.filter((w) => w !== from).map((w) => encode(w, v)).sort().join('')})`;
+  return layer.map((c) => encode(c, -1)).sort()[0]!;
+}
+
+describe('optimalTreeRanking (Schäffer, Inform. Process. Lett. 1989)', () => {
+  it('equals a brute-force subset search on every tree with up to 10 vertices', () => {
+    let checked = 0;
+    for (let n = 1; n <= 10; n++) {
+      const seen = new Set<string>();
+      for (const parent of recursiveTrees(n)) {
+        const key = canonicalTree(parent);
+        if (seen.has(key)) continue;
+        seen.add(key);
+        const tree = treeFromParents(parent);
+        const labels = optimalTreeRanking(tree);
+        const verdict = verifyRanking(tree, labels);
+        expect(verdict.valid).toBe(true);
+        expect(Math.max(...labels), parent.join()).toBe(bruteForceTreeDepth(tree));
+        checked++;
+      }
+    }
+    // The numbers of unlabelled trees on 1..10 vertices (OEIS A000055) add up to 201.
+    expect(checked).toBe(1 + 1 + 1 + 2 + 3 + 6 + 11 + 23 + 47 + 106);
+  });
+
+  it('equals the brute force on random trees of up to 16 vertices', () => {
+    for (let seed = 1; seed <= 120; seed++) {
+      const tree = randomTree(11 + (seed % 6), seed);
+      const labels = optimalTreeRanking(tree);
+      expect(verifyRanking(tree, labels).valid).toBe(true);
+      expect(Math.max(...labels)).toBe(bruteForceTreeDepth(tree));
+    }
+  });
+
+  it('gives paths ⌊log2 n⌋ + 1 labels (Bodlaender et al. 1998) and stars 2', () => {
+    for (const n of [1, 2, 3, 7, 8, 1000, 65_536]) expect(Math.max(...optimalTreeRanking(pathGraph(n)))).toBe(Math.floor(Math.log2(n)) + 1);
+    expect(Math.max(...optimalTreeRanking(starGraph(50)))).toBe(2);
+  });
+
+  it('ranks forests and refuses graphs with a cycle', () => {
+    const forest = graphFromEdges(5, [0, 1, 3, 4]);
+    expect(verifyRanking(forest, optimalTreeRanking(forest)).valid).toBe(true);
+    expect(() => optimalTreeRanking(cycleGraph(5))).toThrow(EngineError);
+    const cycleAndPoint = graphFromEdges(5, [0, 1, 1, 2, 2, 0]);
+    expect(() => optimalTreeRanking(cycleAndPoint)).toThrow(/cycle/);
+  });
+});
