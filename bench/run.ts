@@ -1,5 +1,6 @@
 import { mkdirSync, writeFileSync } from 'node:fs';
 import os from 'node:os';
+import { boundsSuite } from './suites/bounds';
 import { gridSuite } from './suites/grid';
 import { ioSuite } from './suites/io';
 import { verifySuite } from './suites/verify';
@@ -9,7 +10,7 @@ const maxTime = Number(process.env.CAIRN_BENCH_MAX_TIME ?? 2);
 const results = {
   recordedAt: new Date().toISOString(),
   machine: { cpus: os.cpus().length, cpuModel: os.cpus()[0]?.model ?? 'unknown', node: process.version, memoryGiB: Math.round(os.totalmem() / 2 ** 30) },
-  suites: { verify: verifySuite(maxTime), grid: gridSuite(maxTime), io: ioSuite(maxTime) },
+  suites: { verify: verifySuite(maxTime), grid: gridSuite(maxTime), io: ioSuite(maxTime), bounds: boundsSuite(maxTime) },
 };
 const dir = new URL('./results/', import.meta.url);
 mkdirSync(dir, { recursive: true });

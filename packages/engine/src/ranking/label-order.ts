@@ -22,9 +22,10 @@ export function orderByLabel(g: Graph, labels: ArrayLike<number>): LabelOrder {
   const n = g.vertexCount;
   if (labels.length !== n) throw new LabelError(`expected ${n} labels, one per vertex, got ${labels.length}`);
   let top = 0;
+  const whole = labels instanceof Int32Array || labels instanceof Uint32Array; // integers already
   for (let v = 0; v < n; v++) {
     const l = labels[v]!;
-    if (!Number.isSafeInteger(l) || l < 1) throw new LabelError(`the label of vertex ${v} must be a whole number >= 1, got ${l}`);
+    if (l < 1 || !(whole || Number.isSafeInteger(l))) throw new LabelError(`the label of vertex ${v} must be a whole number >= 1, got ${l}`);
     if (l > top) top = l;
   }
   if (top > 4 * n + 1024) return comparisonOrder(labels, top);
