@@ -62,3 +62,6 @@ export { greedyEliminationRanking } from './bounds/greedy-elimination';
 export { bestUpperBound } from './bounds/best-upper-bound';
 export type { BestUpperBound } from './bounds/best-upper-bound';
 export type { LowerBound, LowerBoundWitness } from './bounds/lower-bound';
+export { exactTreeDepth } from './exact/exact-tree-depth';
+export type { ExactOptions, ExactProgress, ExactResult } from './exact/exact-tree-depth';
+export { TreeDepthSearch } from './exact/tree-depth-search';

@@ -1,0 +1,89 @@
+import { bestUpperBound } from '../bounds/best-upper-bound';
+import { Bitset } from '../graph/bitset';
+import type { Graph } from '../graph/graph';
+import { SearchStopped } from './search-stop';
+import { TreeDepthSearch } from './tree-depth-search';
+
+export interface ExactProgress {
+  lower: number;
+  upper: number;
+  nodes: number;
+  memoSize: number;
+  elapsedMs: number;
+}
+
+export interface ExactOptions {
+  signal?: AbortSignal;
+  timeLimitMs?: number;
+  onProgress?: (p: ExactProgress) => void;
+  /** A ranking to start from (its largest label is the first upper bound); bestUpperBound's otherwise. */
+  initial?: { labels: Int32Array; value: number };
+}
+
+export interface ExactResult {
+  /** 'exact' when lower = upper was proven; 'stopped' when a limit came first. */
+  status: 'exact' | 'stopped';
+  stopReason?: 'aborted' | 'time-limit';
+  lower: number;
+  upper: number;
+  /** The best ranking found: it uses `upper` labels and passes verifyRanking. */
+  labels: Int32Array;
+  nodes: number;
+  memoSize: number;
+  elapsedMs: number;
+}
+
+/**
+ * The exact rank number (tree-depth) of g by search, anytime: it deepens "td <= k" from the lower bound
+ * up, reports each proven step, and when the signal or the time limit stops it returns the proven
+ * interval [lower, upper] with the best ranking known.
+ */
+export function exactTreeDepth(g: Graph, options: ExactOptions = {}): ExactResult {
+  const started = Date.now();
+  const n = g.vertexCount;
+  const start = options.initial ?? bestUpperBound(g).best;
+  let upper = start.value;
+  let labels = start.labels;
+  const search = new TreeDepthSearch(g, {
+    signal: options.signal,
+    deadline: options.timeLimitMs === undefined ? undefined : started + options.timeLimitMs,
+  });
+  const all = Bitset.full(n);
+  let lower = n === 0 ? 0 : 1;
+  const report = () =>
+    options.onProgress?.({ lower, upper, nodes: search.nodes, memoSize: search.memo.size, elapsedMs: Date.now() - started });
+  const finish = (status: ExactResult['status'], stopReason?: ExactResult['stopReason']): ExactResult => ({
+    status,
+    ...(stopReason ? { stopReason } : {}),
+    lower,
+    upper,
+    labels,
+    nodes: search.nodes,
+    memoSize: search.memo.size,
+    elapsedMs: Date.now() - started,
+  });
+  try {
+    if (options.signal?.aborted) throw new SearchStopped('aborted');
+    const comps = search.components(all);
+    for (const c of comps) lower = Math.max(lower, search.memo.get(c)?.lower ?? 0);
+    report();
+    while (lower < upper) {
+      if (search.atMost(all, lower)) {
+        const found = new Int32Array(n);
+        search.label(all, lower, found);
+        labels = found;
+        upper = lower;
+      } else {
+        lower++;
+      }
+      report();
+    }
+    return finish('exact');
+  } catch (err) {
+    if (err instanceof SearchStopped) {
+      report();
+      return finish('stopped', err.reason);
+    }
+    throw err;
+  }
+}

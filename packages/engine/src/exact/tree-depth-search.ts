@@ -1,0 +1,166 @@
+import { Bitset } from '../graph/bitset';
+import type { Graph } from '../graph/graph';
+import { BitsetMemo, type MemoEntry } from './bitset-memo';
+import { SearchStopped } from './search-stop';
+
+export interface SearchLimits {
+  signal?: AbortSignal | undefined;
+  /** Wall-clock deadline (Date.now() milliseconds). */
+  deadline?: number | undefined;
+}
+
+/**
+ * Exact tree-depth by search over vertex sets, from the defining recursion (Nešetřil & Ossona de Mendez,
+ * Sparsity, 2012): td(empty) = 0, td(G) = max over components, td(G) = 1 + min_v td(G - v) for connected G.
+ * Asked in decision form, "td(S) <= k?", with the largest component first, every set's proven bounds
+ * memoised, and cheap lower bounds (|S| for a clique, the path bound from a breadth-first eccentricity)
+ * cutting branches that cannot fit.
+ */
+export class TreeDepthSearch {
+  readonly memo = new BitsetMemo();
+  nodes = 0;
+  private readonly n: number;
+  private readonly adj: Bitset[];
+  /** All vertices, highest degree first: the order in which tops are tried. */
+  private readonly byDegree: Uint32Array;
+
+  constructor(
+    g: Graph,
+    private readonly limits: SearchLimits = {},
+  ) {
+    this.n = g.vertexCount;
+    this.adj = Array.from({ length: this.n }, (_, v) => Bitset.of(this.n, g.neighbours(v)));
+    this.byDegree = Uint32Array.from({ length: this.n }, (_, v) => v).sort((a, b) => g.degree(b) - g.degree(a) || a - b);
+  }
+
+  /** The connected components of S, largest first. */
+  components(s: Bitset): Bitset[] {
+    const rest = s.clone();
+    const out: Bitset[] = [];
+    const frontier = new Bitset(this.n);
+    const grown = new Bitset(this.n);
+    for (let start = rest.first(); start >= 0; start = rest.first()) {
+      const comp = new Bitset(this.n).add(start);
+      frontier.clear().add(start);
+      rest.delete(start);
+      while (!frontier.isEmpty()) {
+        grown.clear();
+        frontier.forEach((v) => grown.orWith(this.adj[v]!));
+        grown.andWith(rest);
+        rest.andNotWith(grown);
+        comp.orWith(grown);
+        frontier.copyFrom(grown);
+      }
+      out.push(comp);
+    }
+    return out.length > 1 ? out.sort((a, b) => b.popcount() - a.popcount()) : out;
+  }
+
+  /**
+   * Proven lower bound for a connected set: the degeneracy plus one (td >= tw + 1 >= degeneracy + 1;
+   * a clique gets its size this way), and the path bound from a breadth-first eccentricity.
+   */
+  private cheapLowerBound(c: Bitset, size: number): number {
+    // Degeneracy: repeatedly remove a vertex of least degree inside what is left (Matula & Beck 1983).
+    const left = c.clone();
+    const deg = new Int32Array(this.n);
+    c.forEach((v) => (deg[v] = this.adj[v]!.and(c).popcount()));
+    let degeneracy = 0;
+    for (let remaining = size; remaining > 0; remaining--) {
+      let best = -1;
+      left.forEach((v) => {
+        if (best < 0 || deg[v]! < deg[best]!) best = v;
+      });
+      degeneracy = Math.max(degeneracy, deg[best]!);
+      left.delete(best);
+      this.adj[best]!.forEach((w) => {
+        if (left.has(w)) deg[w]!--;
+      });
+    }
+    const byDegeneracy = degeneracy + 1;
+    // A breadth-first search from the first vertex reaches a vertex at distance ecc: a path of ecc + 1
+    // vertices, so td >= ⌊log2(ecc + 1)⌋ + 1 (Bodlaender et al., SIAM J. Discrete Math. 1998).
+    let ecc = 0;
+    const seen = new Bitset(this.n).add(c.first());
+    let frontier = seen.clone();
+    for (;;) {
+      const next = new Bitset(this.n);
+      frontier.forEach((v) => next.orWith(this.adj[v]!));
+      next.andWith(c).andNotWith(seen);
+      if (next.isEmpty()) break;
+      seen.orWith(next);
+      frontier = next;
+      ecc++;
+    }
+    return Math.max(byDegeneracy, 32 - Math.clz32(ecc + 1));
+  }
+
+  private tick(): void {
+    if ((++this.nodes & 15) !== 0) return;
+    if (this.limits.signal?.aborted) throw new SearchStopped('aborted');
+    if (this.limits.deadline !== undefined && Date.now() > this.limits.deadline) throw new SearchStopped('time-limit');
+  }
+
+  /** The memo entry of a connected set, created with its cheap bounds. */
+  private entryOf(c: Bitset): MemoEntry {
+    const known = this.memo.get(c);
+    if (known) return known;
+    const size = c.popcount();
+    return this.memo.entry(c, this.cheapLowerBound(c, size), size, -1);
+  }
+
+  /** Decides td(S) <= k for any vertex set S. */
+  atMost(s: Bitset, k: number): boolean {
+    for (const c of this.components(s)) if (!this.connectedAtMost(c, k)) return false;
+    return true;
+  }
+
+  /** Decides td(C) <= k for a connected set C, recording what it proves. */
+  connectedAtMost(c: Bitset, k: number): boolean {
+    const e = this.entryOf(c);
+    if (e.upper <= k) return true;
+    if (e.lower > k) return false;
+    this.tick();
+    // Try the vertices of highest degree first: they are the likeliest tops of a shallow elimination tree.
+    const rest = c.clone();
+    for (const v of this.byDegree) {
+      if (!c.has(v)) continue;
+      rest.delete(v);
+      const fits = this.atMost(rest, k - 1);
+      rest.add(v);
+      if (fits) {
+        e.upper = k;
+        e.choice = v;
+        return true;
+      }
+    }
+    e.lower = k + 1;
+    return false;
+  }
+
+  /** The exact tree-depth of a connected set, by deepening k from its lower bound. */
+  treeDepth(c: Bitset): number {
+    const e = this.entryOf(c);
+    while (e.lower < e.upper) this.connectedAtMost(c, e.lower);
+    return e.upper;
+  }
+
+  /**
+   * Labels S (1-based, into `labels`) with at most `k` labels, using the choices the search recorded;
+   * only call after atMost(S, k) returned true.
+   */
+  label(s: Bitset, k: number, labels: Int32Array): void {
+    for (const c of this.components(s)) {
+      const e = this.memo.get(c) ?? this.entryOf(c);
+      if (e.upper > k && !this.connectedAtMost(c, k)) throw new Error('label: the set does not fit in k labels');
+      const fit = Math.min(e.upper, k);
+      if (e.choice < 0) {
+        let next = 1;
+        c.forEach((v) => (labels[v] = next++));
+        continue;
+      }
+      labels[e.choice] = fit;
+      this.label(c.clone().delete(e.choice), fit - 1, labels);
+    }
+  }
+}

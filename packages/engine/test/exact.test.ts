@@ -1,0 +1,91 @@
+import { describe, expect, it } from 'vitest';
+import {
+  completeBipartiteGraph,
+  completeGraph,
+  cycleGraph,
+  exactTreeDepth,
+  formulaFor,
+  gridGraph,
+  maskGraph,
+  pathGraph,
+  randomGraph,
+  seededRandom,
+  verifyRanking,
+  type Graph,
+} from '../src/index';
+import { bruteForceTreeDepth } from './brute-force-td';
+
+function expectExact(g: Graph, expected: number, what: string) {
+  const r = exactTreeDepth(g);
+  expect(r.status, what).toBe('exact');
+  expect(r.upper, what).toBe(expected);
+  expect(r.lower, what).toBe(expected);
+  const verdict = verifyRanking(g, r.labels);
+  expect(verdict.valid, what).toBe(true);
+  if (verdict.valid) expect(verdict.maxLabel, what).toBe(expected);
+}
+
+function randomMask(cells: number, seed: number): Graph {
+  const rand = seededRandom(seed);
+  const rows = 2 + Math.floor(rand() * 4);
+  const cols = Math.ceil((cells + 3) / rows);
+  const present = new Uint8Array(rows * cols);
+  let kept = 0;
+  for (let i = 0; i < present.length && kept < cells; i++) if (rand() < 0.8) (present[i] = 1), kept++;
+  if (kept === 0) present[0] = 1;
+  return maskGraph({ rows, cols, present });
+}
+
+describe('exactTreeDepth', () => {
+  it('equals the brute-force subset search on every grid with mn <= 20', () => {
+    for (let m = 1; m <= 20; m++) for (let n = m; m * n <= 20; n++) expectExact(gridGraph(m, n), bruteForceTreeDepth(gridGraph(m, n)), `${m}x${n}`);
+  });
+
+  it('equals the brute force on 300 random masks of at most 20 cells', () => {
+    for (let seed = 1; seed <= 300; seed++) {
+      const g = randomMask(8 + (seed % 13), seed);
+      expectExact(g, bruteForceTreeDepth(g), `mask seed ${seed}`);
+    }
+  });
+
+  it('equals the brute force on random graphs of at most 16 vertices', () => {
+    for (let seed = 1; seed <= 150; seed++) {
+      const n = 6 + (seed % 11);
+      const g = randomGraph(n, [0.15, 0.3, 0.5][seed % 3]!, seed);
+      expectExact(g, bruteForceTreeDepth(g), `G(${n}) seed ${seed}`);
+    }
+  });
+
+  it('meets the closed forms: paths and cycles (Bodlaender et al. 1998), complete and complete bipartite graphs, the 2 x n grid (Alpert 2010)', () => {
+    for (let n = 1; n <= 40; n++) expectExact(pathGraph(n), formulaFor(pathGraph(n))!.value, `P_${n}`);
+    for (let n = 3; n <= 30; n++) expectExact(cycleGraph(n), formulaFor(cycleGraph(n))!.value, `C_${n}`);
+    for (let n = 1; n <= 8; n++) expectExact(completeGraph(n), n, `K_${n}`);
+    for (let a = 1; a <= 4; a++) for (let b = a; b <= 6; b++) expectExact(completeBipartiteGraph(a, b), Math.min(a, b) + 1, `K_${a},${b}`);
+    for (let n = 1; n <= 14; n++) expectExact(gridGraph(2, n), formulaFor(gridGraph(2, n))!.value, `2x${n}`);
+  });
+
+  it('stops on its signal or time limit with a valid interval and a ranking that proves the upper side', () => {
+    const g = gridGraph(7, 7);
+    const controller = new AbortController();
+    controller.abort();
+    const aborted = exactTreeDepth(g, { signal: controller.signal });
+    expect(aborted).toMatchObject({ status: 'stopped', stopReason: 'aborted' });
+    expect(aborted.lower).toBeLessThanOrEqual(aborted.upper);
+    expect(verifyRanking(g, aborted.labels)).toMatchObject({ valid: true, maxLabel: aborted.upper });
+    const timed = exactTreeDepth(gridGraph(9, 9), { timeLimitMs: 50 });
+    expect(timed.status).toBe('stopped');
+    expect(timed.stopReason).toBe('time-limit');
+    expect(timed.lower).toBeLessThanOrEqual(timed.upper);
+  });
+
+  it('reports progress with the interval closing in', () => {
+    const seen: [number, number][] = [];
+    const r = exactTreeDepth(gridGraph(3, 5), { onProgress: (p) => seen.push([p.lower, p.upper]) });
+    expect(seen.length).toBeGreaterThan(1);
+    for (let i = 1; i < seen.length; i++) {
+      expect(seen[i]![0]).toBeGreaterThanOrEqual(seen[i - 1]![0]);
+      expect(seen[i]![1]).toBeLessThanOrEqual(seen[i - 1]![1]);
+    }
+    expect(seen.at(-1)).toEqual([r.lower, r.upper]);
+  });
+});
