@@ -65,3 +65,7 @@ export type { LowerBound, LowerBoundWitness } from './bounds/lower-bound';
 export { exactTreeDepth } from './exact/exact-tree-depth';
 export type { ExactOptions, ExactProgress, ExactResult } from './exact/exact-tree-depth';
 export { TreeDepthSearch } from './exact/tree-depth-search';
+export { gridLowerBounds } from './bounds/grid-lower-bounds';
+export type { GridLowerBound } from './bounds/grid-lower-bounds';
+export { boundsTable } from './bounds/bounds-table';
+export type { BoundsTableRow } from './bounds/bounds-table';
