@@ -61,7 +61,6 @@ export { nestedDissectionRanking } from './bounds/nested-dissection';
 export { greedyEliminationRanking } from './bounds/greedy-elimination';
 export { bestUpperBound } from './bounds/best-upper-bound';
 export type { BestUpperBound } from './bounds/best-upper-bound';
-export type { LowerBound, LowerBoundWitness } from './bounds/lower-bound';
 export { exactTreeDepth } from './exact/exact-tree-depth';
 export type { ExactOptions, ExactProgress, ExactResult } from './exact/exact-tree-depth';
 export { TreeDepthSearch } from './exact/tree-depth-search';
@@ -69,3 +68,8 @@ export { gridLowerBounds } from './bounds/grid-lower-bounds';
 export type { GridLowerBound } from './bounds/grid-lower-bounds';
 export { boundsTable } from './bounds/bounds-table';
 export type { BoundsTableRow } from './bounds/bounds-table';
+export { solve } from './solve/solve';
+export type { Solution, SolveMethod, SolveOptions } from './solve/solve';
+
+export * from './edge/index';
+export * from './bounds/lower/index';

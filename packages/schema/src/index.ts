@@ -1,3 +1,4 @@
 export { HealthResponse } from './health';
 export { ApiError } from './api-error';
 export { GraphSpec, MAX_GRAPH_VERTICES } from './graph-spec';
+export { SolveMethod, SolveResult } from './solve-result';

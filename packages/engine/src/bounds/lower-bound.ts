@@ -4,7 +4,7 @@ export type LowerBoundWitness =
   | { kind: 'path'; vertices: number[] }
   /** A clique (every two adjacent): χr >= its size. */
   | { kind: 'clique'; vertices: number[] }
-  /** An elimination order in which each vertex, when removed, has >= `degeneracy` neighbours left at some point. */
+  /** The `degeneracy`-core: a vertex set in which every vertex has at least `degeneracy` neighbours inside it. */
   | { kind: 'degeneracy'; degeneracy: number; core: number[] }
   /** Minor-min-width: the contraction sequence that reached a minor of minimum degree `width`. */
   | { kind: 'minor-min-width'; width: number; contractions: [number, number][] }
@@ -12,7 +12,7 @@ export type LowerBoundWitness =
   | { kind: 'rectangle'; row: number; col: number; rows: number; cols: number; value: number; provenance: string }
   /** A contained staircase S(t) of a grid shape, anchored at (row, col), whose rank number is known. */
   | { kind: 'staircase'; row: number; col: number; t: number; value: number; provenance: string }
-  /** The graph with `vertex` removed has rank number at least `value`; removing a vertex lowers it by at most one. */
+  /** The graph with `vertex` removed has rank number at least `value`, so G has too (χr never grows on subgraphs). */
   | { kind: 'vertex-removed'; vertex: number; value: number; provenance: string }
   /** Nothing to check: every graph with a vertex needs one label. */
   | { kind: 'trivial' };

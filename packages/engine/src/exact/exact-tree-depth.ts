@@ -18,6 +18,8 @@ export interface ExactOptions {
   onProgress?: (p: ExactProgress) => void;
   /** A ranking to start from (its largest label is the first upper bound); bestUpperBound's otherwise. */
   initial?: { labels: Int32Array; value: number };
+  /** A lower bound already proven elsewhere, where deepening may start. */
+  lower?: number;
 }
 
 export interface ExactResult {
@@ -49,7 +51,7 @@ export function exactTreeDepth(g: Graph, options: ExactOptions = {}): ExactResul
     deadline: options.timeLimitMs === undefined ? undefined : started + options.timeLimitMs,
   });
   const all = Bitset.full(n);
-  let lower = n === 0 ? 0 : 1;
+  let lower = n === 0 ? 0 : Math.max(1, Math.min(options.lower ?? 1, upper));
   const report = () =>
     options.onProgress?.({ lower, upper, nodes: search.nodes, memoSize: search.memo.size, elapsedMs: Date.now() - started });
   const finish = (status: ExactResult['status'], stopReason?: ExactResult['stopReason']): ExactResult => ({
@@ -64,8 +66,6 @@ export function exactTreeDepth(g: Graph, options: ExactOptions = {}): ExactResul
   });
   try {
     if (options.signal?.aborted) throw new SearchStopped('aborted');
-    const comps = search.components(all);
-    for (const c of comps) lower = Math.max(lower, search.memo.get(c)?.lower ?? 0);
     report();
     while (lower < upper) {
       if (search.atMost(all, lower)) {

@@ -20,7 +20,7 @@ export function randomGraph(n: number, p: number, seed: number): Graph {
   if (p === 1) {
     for (let v = 1; v < n; v++) for (let w = 0; w < v; w++) pairs.push(v, w);
   } else if (p > 0) {
-    const logq = Math.log(1 - p);
+    const logq = Math.log1p(-p); // exact for tiny p, where log(1 - p) would round to 0
     let v = 1;
     let w = -1;
     while (v < n) {

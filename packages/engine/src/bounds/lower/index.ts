@@ -1,0 +1,20 @@
+// Lower bounds on the rank number χr = tree-depth, each with a witness anyone can re-check.
+export { longPathBound, DEFAULT_PATH_BUDGET } from './long-path';
+export type { LongPathOptions } from './long-path';
+export { cliqueBound, DEFAULT_CLIQUE_BUDGET } from './clique';
+export type { CliqueOptions } from './clique';
+export { degeneracyBound } from './degeneracy-bound';
+export { coreDecomposition } from './core-decomposition';
+export type { CoreDecomposition } from './core-decomposition';
+export { minorMinWidthBound, DEFAULT_MMW_BUDGET } from './minor-min-width';
+export type { MinorMinWidthOptions } from './minor-min-width';
+export { rectangleBound, rectangleClosedForm, RECTANGLE_GRID2_PROVENANCE, RECTANGLE_PATH_PROVENANCE } from './rectangle';
+export type { RectangleOptions } from './rectangle';
+export { staircaseBound, STAIRCASE_PATH_PROVENANCE } from './staircase';
+export { vertexRemovedBound, graphWithoutVertex } from './vertex-removed';
+export { bestLowerBound } from './best-lower-bound';
+export type { BestLowerBound, BestLowerBoundOptions } from './best-lower-bound';
+export { checkLowerBoundWitness } from './check-witness';
+export type { CheckOptions, WitnessVerdict } from './check-witness';
+export type { KnownRectangleValues, KnownStaircaseValues, KnownValue } from './grid-shape';
+export type { LowerBound, LowerBoundWitness } from '../lower-bound';
