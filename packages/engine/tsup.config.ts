@@ -1,9 +1,10 @@
 import { defineConfig } from 'tsup';
 
+// The pool's worker is an entry of its own, so dist/pool/index.js finds it at ./worker.js.
 export default defineConfig({
-  entry: ['src/index.ts'],
+  entry: { index: 'src/index.ts', 'pool/index': 'src/pool/index.ts', 'pool/worker': 'src/pool/worker.ts' },
   format: ['esm'],
-  dts: true,
+  dts: { entry: { index: 'src/index.ts', 'pool/index': 'src/pool/index.ts' } },
   sourcemap: true,
   clean: true,
   target: 'node20',

@@ -14,6 +14,8 @@ export interface ExactProgress {
 
 export interface ExactOptions {
   signal?: AbortSignal;
+  /** A flag shared with another thread: non-zero stops the search, as the signal does. */
+  stopFlag?: Int32Array;
   timeLimitMs?: number;
   onProgress?: (p: ExactProgress) => void;
   /** A ranking to start from (its largest label is the first upper bound); bestUpperBound's otherwise. */
@@ -48,6 +50,7 @@ export function exactTreeDepth(g: Graph, options: ExactOptions = {}): ExactResul
   let labels = start.labels;
   const search = new TreeDepthSearch(g, {
     signal: options.signal,
+    stopFlag: options.stopFlag,
     deadline: options.timeLimitMs === undefined ? undefined : started + options.timeLimitMs,
   });
   const all = Bitset.full(n);

@@ -5,6 +5,8 @@ import { SearchStopped } from './search-stop';
 
 export interface SearchLimits {
   signal?: AbortSignal | undefined;
+  /** A flag shared with another thread: non-zero stops the search (a worker's event loop is busy with it). */
+  stopFlag?: Int32Array | undefined;
   /** Wall-clock deadline (Date.now() milliseconds). */
   deadline?: number | undefined;
 }
@@ -97,7 +99,7 @@ export class TreeDepthSearch {
 
   private tick(): void {
     if ((++this.nodes & 15) !== 0) return;
-    if (this.limits.signal?.aborted) throw new SearchStopped('aborted');
+    if (this.limits.signal?.aborted || (this.limits.stopFlag && Atomics.load(this.limits.stopFlag, 0) !== 0)) throw new SearchStopped('aborted');
     if (this.limits.deadline !== undefined && Date.now() > this.limits.deadline) throw new SearchStopped('time-limit');
   }
 

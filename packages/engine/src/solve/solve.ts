@@ -16,6 +16,8 @@ export interface SolveOptions {
   method?: SolveMethod;
   timeLimitMs?: number;
   signal?: AbortSignal;
+  /** A flag shared with another thread: non-zero stops the search, as the signal does (worker threads). */
+  stopFlag?: Int32Array;
   onProgress?: (p: ExactProgress) => void;
   /** Known rank numbers of full grids (e.g. from the atlas), for rectangle lower bounds. */
   knownRectangle?: KnownRectangleValues;
@@ -72,6 +74,7 @@ export function solve(g: Graph, options: SolveOptions = {}): Solution {
       initial: { labels, value: upper },
       lower,
       ...(options.signal ? { signal: options.signal } : {}),
+      ...(options.stopFlag ? { stopFlag: options.stopFlag } : {}),
       ...(options.timeLimitMs !== undefined ? { timeLimitMs: options.timeLimitMs } : {}),
       ...(options.onProgress ? { onProgress: options.onProgress } : {}),
     });

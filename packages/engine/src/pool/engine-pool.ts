@@ -1,0 +1,96 @@
+import { availableParallelism } from 'node:os';
+import { MessageChannel } from 'node:worker_threads';
+import { Piscina } from 'piscina';
+import { EngineError } from '../errors';
+import type { EngineTask, EngineTaskResult, ExactProgress, WorkerMessage } from './task';
+
+export interface EnginePoolOptions {
+  /** Worker threads; the machine's core count by default. */
+  size?: number;
+  /** Heap limit per worker (V8 old generation), in MiB; a task beyond it fails, the pool carries on. */
+  memoryLimitMb?: number;
+  /** How long a cancelled or overdue task may take to stop by itself before its worker is ended. */
+  graceMs?: number;
+}
+
+export interface RunOptions {
+  signal?: AbortSignal;
+  onProgress?: (p: ExactProgress) => void;
+}
+
+const fromSource = import.meta.url.endsWith('.ts');
+
+/**
+ * Runs engine tasks on worker threads (piscina). A cancelled task is first asked to stop through a
+ * shared flag, so a search returns its best interval; only if it does not stop within the grace period
+ * is its worker ended. A worker that crashes or runs out of memory fails its own task with a clear
+ * error, and the pool starts a fresh worker for the next.
+ */
+export class EnginePool {
+  private readonly piscina: Piscina;
+  private readonly graceMs: number;
+  readonly size: number;
+  readonly memoryLimitMb: number | undefined;
+
+  constructor(options: EnginePoolOptions = {}) {
+    this.size = Math.max(1, options.size ?? availableParallelism());
+    this.graceMs = options.graceMs ?? 2000;
+    this.memoryLimitMb = options.memoryLimitMb;
+    const filename = new URL(fromSource ? './worker.ts' : './worker.js', import.meta.url).href;
+    this.piscina = new Piscina({
+      filename,
+      minThreads: 0,
+      maxThreads: this.size,
+      idleTimeout: 30_000,
+      // From source (tests, tsx), workers need the TypeScript loader too: registering it in this thread
+      // does not reach them on Node 20.
+      ...(fromSource ? { execArgv: [...process.execArgv, '--import', import.meta.resolve('tsx')] } : {}),
+      ...(options.memoryLimitMb ? { resourceLimits: { maxOldGenerationSizeMb: options.memoryLimitMb } } : {}),
+    });
+  }
+
+  /** Runs one task; resolves with its result, rejects with an EngineError when it cannot finish. */
+  async run(task: EngineTask, options: RunOptions = {}): Promise<EngineTaskResult> {
+    const stop = new SharedArrayBuffer(4);
+    const flag = new Int32Array(stop);
+    const { port1, port2 } = new MessageChannel();
+    if (options.onProgress) port1.on('message', options.onProgress);
+    const hardStop = new AbortController();
+    let killTimer: NodeJS.Timeout | undefined;
+    const softStop = () => {
+      Atomics.store(flag, 0, 1);
+      killTimer ??= setTimeout(() => hardStop.abort(), this.graceMs);
+    };
+    if (options.signal?.aborted) softStop();
+    options.signal?.addEventListener('abort', softStop, { once: true });
+    // A search honours its own time limit; the pool only steps in if the worker does not come back.
+    const overdue =
+      task.kind === 'solve' && task.timeLimitMs !== undefined ? setTimeout(softStop, task.timeLimitMs + this.graceMs) : undefined;
+    const message: WorkerMessage = { task, port: port2, stop };
+    try {
+      return (await this.piscina.run(message, { transferList: [port2], signal: hardStop.signal })) as EngineTaskResult;
+    } catch (err) {
+      throw describeFailure(err, hardStop.signal.aborted, this.memoryLimitMb);
+    } finally {
+      clearTimeout(killTimer);
+      clearTimeout(overdue);
+      options.signal?.removeEventListener('abort', softStop);
+      port1.close();
+    }
+  }
+
+  /** Ends every worker; tasks still running fail. */
+  async close(): Promise<void> {
+    await this.piscina.destroy();
+  }
+}
+
+function describeFailure(err: unknown, killed: boolean, memoryLimitMb: number | undefined): EngineError {
+  const e = err as { code?: string; message?: string; name?: string };
+  if (killed) return new EngineError('task_killed', 'the task did not stop when asked, so its worker was ended');
+  if (e?.code === 'ERR_WORKER_OUT_OF_MEMORY') {
+    return new EngineError('out_of_memory', `the task ran out of memory${memoryLimitMb ? ` (limit ${memoryLimitMb} MiB per worker)` : ''}`);
+  }
+  if (err instanceof EngineError) return err;
+  return new EngineError('worker_failed', `the task failed: ${e?.message ?? String(err)}`);
+}

@@ -1,0 +1,27 @@
+import type { GraphSpec } from '../spec/graph-spec';
+import type { Solution, SolveMethod } from '../solve/solve';
+import type { RankingVerdict } from '../ranking/verify';
+import type { ExactProgress } from '../exact/exact-tree-depth';
+
+/** Work the pool runs on a worker thread; everything in it crosses threads by structured clone. */
+export type EngineTask =
+  | {
+      kind: 'solve';
+      /** A spec, text or JSON form; files it names come in `files` (path -> content). */
+      spec: GraphSpec | string;
+      files?: Record<string, string>;
+      method?: SolveMethod;
+      timeLimitMs?: number;
+    }
+  | { kind: 'verify'; spec: GraphSpec | string; files?: Record<string, string>; labels: number[] };
+
+export type EngineTaskResult = { kind: 'solve'; solution: Solution } | { kind: 'verify'; verdict: RankingVerdict };
+
+/** What the worker receives: the task, a port for progress, and the shared stop flag. */
+export interface WorkerMessage {
+  task: EngineTask;
+  port: import('node:worker_threads').MessagePort;
+  stop: SharedArrayBuffer;
+}
+
+export type { ExactProgress };

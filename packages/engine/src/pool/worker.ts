@@ -1,0 +1,30 @@
+import { EngineError } from '../errors';
+import { verifyRanking } from '../ranking/verify';
+import { solve } from '../solve/solve';
+import { graphFromSpec } from '../spec/graph-from-spec';
+import type { EngineTaskResult, WorkerMessage } from './task';
+
+/**
+ * The pool's worker: builds the graph from its spec and runs the task. The search is synchronous, so
+ * cancellation arrives through the shared stop flag (checked inside the search), not through messages.
+ */
+export default function runTask({ task, port, stop }: WorkerMessage): EngineTaskResult {
+  const files = task.files ?? {};
+  const graph = graphFromSpec(task.spec, (path) => {
+    const content = files[path];
+    if (content === undefined) throw new EngineError('file_missing', `the task names the file ${path}, which was not sent with it`);
+    return content;
+  });
+  try {
+    if (task.kind === 'verify') return { kind: 'verify', verdict: verifyRanking(graph, task.labels) };
+    const solution = solve(graph, {
+      ...(task.method ? { method: task.method } : {}),
+      ...(task.timeLimitMs !== undefined ? { timeLimitMs: task.timeLimitMs } : {}),
+      stopFlag: new Int32Array(stop),
+      onProgress: (p) => port.postMessage(p),
+    });
+    return { kind: 'solve', solution };
+  } finally {
+    port.close();
+  }
+}

@@ -1,0 +1,60 @@
+import { afterAll, describe, expect, it } from 'vitest';
+import { gridGraph, verifyRanking } from '../../src/index';
+import { bruteForceTreeDepth } from '../brute-force-td';
+import { EnginePool } from '../../src/pool/index';
+
+const pool = new EnginePool({ size: 2, graceMs: 1500 });
+afterAll(() => pool.close());
+
+describe('EnginePool (real worker threads)', () => {
+  it('solves on a worker and returns a ranking the verifier accepts', async () => {
+    const result = await pool.run({ kind: 'solve', spec: 'grid:3x5' });
+    if (result.kind !== 'solve') throw new Error('expected a solve result');
+    expect(result.solution.rankNumber).toBe(bruteForceTreeDepth(gridGraph(3, 5)));
+    expect(verifyRanking(gridGraph(3, 5), result.solution.labels).valid).toBe(true);
+  });
+
+  it('reads files sent with the task and verifies labels', async () => {
+    const result = await pool.run({ kind: 'verify', spec: 'mask:l.mask', files: { 'l.mask': '#.\n##\n' }, labels: [1, 2, 1] });
+    expect(result).toEqual({ kind: 'verify', verdict: { valid: true, labelsUsed: 2, maxLabel: 2 } });
+  });
+
+  it('reports progress and stops a search when cancelled, keeping the best interval', async () => {
+    const controller = new AbortController();
+    const seen: number[] = [];
+    const running = pool.run({ kind: 'solve', spec: 'grid:9x9', method: 'exact' }, { signal: controller.signal, onProgress: (p) => seen.push(p.lower) });
+    setTimeout(() => controller.abort(), 300);
+    const result = await running;
+    if (result.kind !== 'solve') throw new Error('expected a solve result');
+    expect(result.solution.stats.stopReason).toBe('aborted');
+    expect(result.solution.rankNumber).toBeNull();
+    expect(result.solution.lower).toBeLessThan(result.solution.upper);
+    expect(seen.length).toBeGreaterThan(0);
+    expect(verifyRanking(gridGraph(9, 9), result.solution.labels)).toMatchObject({ valid: true, maxLabel: result.solution.upper });
+  });
+
+  it('honours a time limit inside the worker', async () => {
+    const result = await pool.run({ kind: 'solve', spec: 'grid:9x9', timeLimitMs: 200 });
+    if (result.kind !== 'solve') throw new Error('expected a solve result');
+    expect(result.solution.stats.stopReason).toBe('time-limit');
+  });
+
+  it('fails a task with a clear error and carries on', async () => {
+    await expect(pool.run({ kind: 'solve', spec: 'grdi:4x4' })).rejects.toThrow(/unknown graph family 'grdi'/);
+    await expect(pool.run({ kind: 'solve', spec: 'mask:gone.mask' })).rejects.toThrow(/not sent with it/);
+    const after = await pool.run({ kind: 'solve', spec: 'path:9' });
+    expect(after.kind === 'solve' && after.solution.rankNumber).toBe(4);
+  });
+
+  it('fails a task that runs out of its memory limit, and the pool carries on', async () => {
+    const small = new EnginePool({ size: 1, memoryLimitMb: 24 });
+    try {
+      // The exact search's memo on a large grid grows without bound; the limit ends it.
+      await expect(small.run({ kind: 'solve', spec: 'grid:12x12', method: 'exact' })).rejects.toThrow(/ran out of memory \(limit 24 MiB per worker\)/);
+      const after = await small.run({ kind: 'solve', spec: 'cycle:9' });
+      expect(after.kind === 'solve' && after.solution.rankNumber).toBe(5);
+    } finally {
+      await small.close();
+    }
+  });
+});
