@@ -2,6 +2,7 @@ import { Bitset } from '../graph/bitset';
 import type { Graph } from '../graph/graph';
 import { BitsetMemo, type MemoEntry } from './bitset-memo';
 import { SearchStopped } from './search-stop';
+import { ShapeCanon, type CanonicalShape } from './shape-canon';
 
 export interface SearchLimits {
   signal?: AbortSignal | undefined;
@@ -25,6 +26,8 @@ export class TreeDepthSearch {
   private readonly adj: Bitset[];
   /** All vertices, highest degree first: the order in which tops are tried. */
   private readonly byDegree: Uint32Array;
+  /** For grid shapes: memo keys up to translation and the 8 symmetries of the square. */
+  private readonly canon: ShapeCanon | undefined;
 
   constructor(
     g: Graph,
@@ -32,6 +35,7 @@ export class TreeDepthSearch {
   ) {
     this.n = g.vertexCount;
     this.adj = Array.from({ length: this.n }, (_, v) => Bitset.of(this.n, g.neighbours(v)));
+    this.canon = ShapeCanon.applies(g) ? new ShapeCanon(g) : undefined;
     this.byDegree = Uint32Array.from({ length: this.n }, (_, v) => v).sort((a, b) => g.degree(b) - g.degree(a) || a - b);
   }
 
@@ -103,12 +107,17 @@ export class TreeDepthSearch {
     if (this.limits.deadline !== undefined && Date.now() > this.limits.deadline) throw new SearchStopped('time-limit');
   }
 
-  /** The memo entry of a connected set, created with its cheap bounds. */
-  private entryOf(c: Bitset): MemoEntry {
-    const known = this.memo.get(c);
-    if (known) return known;
+  /**
+   * The memo entry of a connected set (created with its cheap bounds), and for grid shapes the frame in
+   * which its `choice` is written.
+   */
+  private entryOf(c: Bitset): { e: MemoEntry; shape: CanonicalShape | undefined } {
+    const shape = this.canon?.canonical(c);
+    const key = shape ? shape.key : c;
+    const known = this.memo.get(key);
+    if (known) return { e: known, shape };
     const size = c.popcount();
-    return this.memo.entry(c, this.cheapLowerBound(c, size), size, -1);
+    return { e: this.memo.entry(key, this.cheapLowerBound(c, size), size, -1), shape };
   }
 
   /** Decides td(S) <= k for any vertex set S. */
@@ -119,7 +128,7 @@ export class TreeDepthSearch {
 
   /** Decides td(C) <= k for a connected set C, recording what it proves. */
   connectedAtMost(c: Bitset, k: number): boolean {
-    const e = this.entryOf(c);
+    const { e, shape } = this.entryOf(c);
     if (e.upper <= k) return true;
     if (e.lower > k) return false;
     this.tick();
@@ -132,7 +141,7 @@ export class TreeDepthSearch {
       rest.add(v);
       if (fits) {
         e.upper = k;
-        e.choice = v;
+        e.choice = shape ? shape.toCanonical(v) : v;
         return true;
       }
     }
@@ -142,7 +151,7 @@ export class TreeDepthSearch {
 
   /** The exact tree-depth of a connected set, by deepening k from its lower bound. */
   treeDepth(c: Bitset): number {
-    const e = this.entryOf(c);
+    const { e } = this.entryOf(c);
     while (e.lower < e.upper) this.connectedAtMost(c, e.lower);
     return e.upper;
   }
@@ -153,7 +162,7 @@ export class TreeDepthSearch {
    */
   label(s: Bitset, k: number, labels: Int32Array): void {
     for (const c of this.components(s)) {
-      const e = this.memo.get(c) ?? this.entryOf(c);
+      const { e, shape } = this.entryOf(c);
       if (e.upper > k && !this.connectedAtMost(c, k)) throw new Error('label: the set does not fit in k labels');
       const fit = Math.min(e.upper, k);
       if (e.choice < 0) {
@@ -161,8 +170,9 @@ export class TreeDepthSearch {
         c.forEach((v) => (labels[v] = next++));
         continue;
       }
-      labels[e.choice] = fit;
-      this.label(c.clone().delete(e.choice), fit - 1, labels);
+      const top = shape ? shape.fromCanonical(e.choice) : e.choice;
+      labels[top] = fit;
+      this.label(c.clone().delete(top), fit - 1, labels);
     }
   }
 }

@@ -19,13 +19,21 @@ export interface LabelOrder {
  * beyond the vertex count fall back to a comparison sort.
  */
 export function orderByLabel(g: Graph, labels: ArrayLike<number>): LabelOrder {
-  const n = g.vertexCount;
-  if (labels.length !== n) throw new LabelError(`expected ${n} labels, one per vertex, got ${labels.length}`);
+  return orderLabels(labels, g.vertexCount, 'vertex', 'one per vertex');
+}
+
+/**
+ * The same for any numbered items (vertices, edges): `count` labels expected, `noun` names an item in
+ * error messages, `expectation` says how the labels are laid out.
+ */
+export function orderLabels(labels: ArrayLike<number>, count: number, noun: string, expectation: string): LabelOrder {
+  const n = count;
+  if (labels.length !== n) throw new LabelError(`expected ${n} labels, ${expectation}, got ${labels.length}`);
   let top = 0;
   const whole = labels instanceof Int32Array || labels instanceof Uint32Array; // integers already
   for (let v = 0; v < n; v++) {
     const l = labels[v]!;
-    if (l < 1 || !(whole || Number.isSafeInteger(l))) throw new LabelError(`the label of vertex ${v} must be a whole number >= 1, got ${l}`);
+    if (!(l >= 1) || !(whole || Number.isSafeInteger(l))) throw new LabelError(`the label of ${noun} ${v} must be a whole number >= 1, got ${l}`);
     if (l > top) top = l;
   }
   if (top > 4 * n + 1024) return comparisonOrder(labels, top);

@@ -1,0 +1,63 @@
+import { mkdirSync, writeFileSync } from 'node:fs';
+import os from 'node:os';
+import { exactTreeDepth, gridGraph, maskGraph, randomGraph, staircaseGraph, type Graph } from '@cairn/engine';
+
+// The exact search's benchmark cases (timed runs, not benchmark.js: one run can take seconds). Each run
+// has a time limit (CAIRN_EXACT_LIMIT_S, default 10 s), so the figures say how far it got, not only how fast.
+const limitMs = 1000 * Number(process.env.CAIRN_EXACT_LIMIT_S ?? 10);
+
+function cornerless(rows: number, cols: number): Graph {
+  const present = new Uint8Array(rows * cols).fill(1);
+  present[0] = 0;
+  return maskGraph({ rows, cols, present });
+}
+
+const cases: [string, Graph, number | null][] = [
+  ['grid 4x30', gridGraph(4, 30), 1000],
+  ['grid 5x16', gridGraph(5, 16), 1000],
+  ['grid 6x12', gridGraph(6, 12), 1000],
+  ['grid 7x8', gridGraph(7, 8), 1000],
+  ['grid 8x8', gridGraph(8, 8), 1000],
+  ['grid 9x9', gridGraph(9, 9), 15000],
+  ['staircase S(10)', staircaseGraph(10), null],
+  ['grid 8x8 without a corner', cornerless(8, 8), null],
+  ['G(30, 3/30) seed 1', randomGraph(30, 3 / 30, 1), null],
+  ['G(40, 3/40) seed 1', randomGraph(40, 3 / 40, 1), null],
+  ['G(50, 3/50) seed 1', randomGraph(50, 3 / 50, 1), null],
+];
+
+const rows = cases.map(([name, g, targetMs]) => {
+  global.gc?.();
+  const before = process.memoryUsage().rss;
+  let peak = before;
+  const timer = setInterval(() => (peak = Math.max(peak, process.memoryUsage().rss)), 50);
+  const r = exactTreeDepth(g, { timeLimitMs: limitMs, onProgress: () => (peak = Math.max(peak, process.memoryUsage().rss)) });
+  clearInterval(timer);
+  peak = Math.max(peak, process.memoryUsage().rss);
+  const row = {
+    name,
+    vertices: g.vertexCount,
+    status: r.status,
+    lower: r.lower,
+    upper: r.upper,
+    elapsedMs: r.elapsedMs,
+    nodes: r.nodes,
+    memoSize: r.memoSize,
+    peakRssMiB: Math.round(peak / 2 ** 20),
+    targetMs,
+    meetsTarget: targetMs === null ? null : r.status === 'exact' && r.elapsedMs <= targetMs,
+  };
+  process.stdout.write(`${name}: ${r.status} [${r.lower}, ${r.upper}] in ${r.elapsedMs} ms, ${r.nodes} nodes, memo ${r.memoSize}, peak ${row.peakRssMiB} MiB\n`);
+  return row;
+});
+
+const out = {
+  recordedAt: new Date().toISOString(),
+  machine: { cpus: os.cpus().length, cpuModel: os.cpus()[0]?.model ?? 'unknown', node: process.version, memoryGiB: Math.round(os.totalmem() / 2 ** 30) },
+  timeLimitMs: limitMs,
+  cases: rows,
+};
+const dir = new URL('./results/', import.meta.url);
+mkdirSync(dir, { recursive: true });
+writeFileSync(new URL('exact.json', dir), `${JSON.stringify(out, null, 2)}\n`);
+process.stdout.write('figures written to bench/results/exact.json\n');
