@@ -12,3 +12,17 @@ describe('cairn', () => {
     expect(out.trim()).toBe(pkg.version);
   });
 });
+
+describe('cairn commands', () => {
+  it('has the batch commands, each with examples in its help', () => {
+    const program = buildProgram();
+    const names = program.commands.map((c) => c.name());
+    expect(names).toEqual(['solve', 'verify', 'bounds', 'formula', 'plan', 'edge-rank', 'convert']);
+    for (const c of program.commands) {
+      let help = '';
+      c.configureOutput({ writeOut: (s) => (help += s) });
+      c.outputHelp();
+      expect(help, c.name()).toMatch(/Examples:\n {2}cairn /);
+    }
+  });
+});

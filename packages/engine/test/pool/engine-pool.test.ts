@@ -56,5 +56,5 @@ describe('EnginePool (real worker threads)', () => {
     } finally {
       await small.close();
     }
-  });
+  }, 30_000);
 });
