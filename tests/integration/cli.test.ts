@@ -1,5 +1,5 @@
 import { execFile } from 'node:child_process';
-import { mkdtempSync, writeFileSync } from 'node:fs';
+import { mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
@@ -79,6 +79,35 @@ describe('the cairn command', () => {
     const none = await cairn(['formula', 'grid', '3', '3']);
     expect(none.code).toBe(1);
     expect(none.stdout).toMatch(/no closed form/);
+  });
+
+  it('sweep tabulates a range on worker threads: the 1 x n and 2 x n rows meet their closed forms', async () => {
+    const { code, stdout } = await cairn(['sweep', 'grid', '--rows', '1..2', '--cols', '1..8', '--format', 'csv', '--jobs', '2', '--quiet']);
+    expect(code).toBe(0);
+    const lines = stdout.trim().split('\n');
+    expect(lines[0]).toBe('family,rows,cols,rank_number,lower,upper,provenance,elapsed_ms,status');
+    expect(lines).toHaveLength(17);
+    for (const line of lines.slice(1)) {
+      const [, m, n, value] = line.split(',').map(Number);
+      // P_n: ⌊log2 n⌋ + 1 (Bodlaender et al. 1998); P_2 x P_n: ⌊log2(n+1)⌋ + ⌊log2((n+1)/3)⌋ + 2 (Alpert 2010).
+      const expected = m === 1 ? Math.floor(Math.log2(n!)) + 1 : Math.floor(Math.log2(n! + 1)) + (n! + 1 >= 3 ? Math.floor(Math.log2((n! + 1) / 3)) : -1) + 2;
+      expect(value, line).toBe(expected);
+    }
+    const md = await cairn(['sweep', 'staircase', '--sizes', '1..4', '--format', 'md', '--quiet']);
+    expect(md.stdout.split('\n')[0]).toBe('| size | rank number |');
+  });
+
+  it('sweep --resume keeps the cells already written and computes only the rest', async () => {
+    const out = join(work, 'grids.csv');
+    writeFileSync(out, 'family,rows,cols,rank_number,lower,upper,provenance,elapsed_ms,status\ngrid,1,1,1,1,1,formula:path,3,exact\ngrid,1,2,2,2,2,formula:path,2,exact\ngrid,1,3,,1,9,bound,5,interrupted\n');
+    const { code, stderr } = await cairn(['sweep', 'grid', '--rows', '1..2', '--cols', '1..3', '--format', 'csv', '--out', out, '--resume']);
+    expect(code).toBe(0);
+    expect(stderr).toMatch(/resuming: 2 cells already in .*grids\.csv, 4 to go/);
+    const lines = readFileSync(out, 'utf8').trim().split('\n');
+    expect(lines).toHaveLength(7);
+    expect(lines.filter((l) => l.startsWith('grid,1,3,')).map((l) => l.split(',')[8])).toEqual(['exact']);
+    expect(lines[1]).toBe('grid,1,1,1,1,1,formula:path,3,exact'); // kept as it was, not recomputed
+    expect((await cairn(['sweep', 'grid', '--rows', '1..2', '--cols', '1..3', '--resume'])).code).toBe(2);
   });
 
   it('bounds, plan, edge-rank and convert give consistent answers', async () => {

@@ -6,6 +6,7 @@ import { edgeRankCommand } from './commands/edge-rank';
 import { formulaCommand } from './commands/formula';
 import { planCommand } from './commands/plan';
 import { solveCommand } from './commands/solve';
+import { sweepCommand } from './commands/sweep';
 import { verifyCommand } from './commands/verify';
 
 /** The `cairn` command tree. Built by a function so tests can run it without a process of its own. */
@@ -20,6 +21,6 @@ export function buildProgram(): Command {
     );
   // Errors become exceptions (for every command added below), so the entry point picks the exit status.
   program.exitOverride().configureOutput({ outputError: (text, write) => write(text) });
-  for (const add of [solveCommand, verifyCommand, boundsCommand, formulaCommand, planCommand, edgeRankCommand, convertCommand]) add(program);
+  for (const add of [solveCommand, verifyCommand, boundsCommand, formulaCommand, sweepCommand, planCommand, edgeRankCommand, convertCommand]) add(program);
   return program;
 }
