@@ -39,3 +39,31 @@ describe('canonical grid shapes', () => {
     expect(ShapeCanon.applies(maskGraph({ rows: 2, cols: 2, present: Uint8Array.from([1, 1, 1, 0]) }))).toBe(true);
   });
 });
+
+describe('full rectangles inside a shape', () => {
+  it('include a rectangle of every largest height and width that fits, each one full (random masks, brute force)', () => {
+    const rand = seededRandom(11);
+    for (let trial = 0; trial < 150; trial++) {
+      const rows = 2 + Math.floor(rand() * 5);
+      const cols = 2 + Math.floor(rand() * 6);
+      const present = Uint8Array.from({ length: rows * cols }, () => (rand() < 0.75 ? 1 : 0));
+      present[0] = 1;
+      const g = maskGraph({ rows, cols, present });
+      const canon = new ShapeCanon(g);
+      const found = canon.fullRectangles(Bitset.full(g.vertexCount));
+      const full = (r: number, c: number, h: number, w: number) => {
+        for (let i = r; i < r + h; i++) for (let j = c; j < c + w; j++) if (!present[i * cols + j]) return false;
+        return true;
+      };
+      // Brute force: the largest area of a full rectangle, and every found one fits somewhere.
+      let bestArea = 0;
+      for (let r = 0; r < rows; r++) for (let c = 0; c < cols; c++) for (let h = 1; r + h <= rows; h++) for (let w = 1; c + w <= cols; w++) if (full(r, c, h, w)) bestArea = Math.max(bestArea, h * w);
+      expect(Math.max(...found.map(([h, w]) => h * w))).toBe(bestArea);
+      for (const [h, w] of found) {
+        let fits = false;
+        for (let r = 0; r + h <= rows && !fits; r++) for (let c = 0; c + w <= cols && !fits; c++) fits = full(r, c, h, w);
+        expect(fits, `${h}x${w}`).toBe(true);
+      }
+    }
+  });
+});

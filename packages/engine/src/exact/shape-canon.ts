@@ -44,6 +44,50 @@ export class ShapeCanon {
     }
   }
 
+  /**
+   * The maximal full rectangles inside a set's cells (every cell of the rectangle in the set), as
+   * [height, width] pairs: the histogram-and-stack method, one pass over the bounding box per row.
+   */
+  fullRectangles(set: Bitset): [number, number][] {
+    let r0 = Infinity;
+    let r1 = -1;
+    let c0 = Infinity;
+    let c1 = -1;
+    set.forEach((v) => {
+      const r = this.row[v]!;
+      const c = this.col[v]!;
+      if (r < r0) r0 = r;
+      if (r > r1) r1 = r;
+      if (c < c0) c0 = c;
+      if (c > c1) c1 = c;
+    });
+    const w = c1 - c0 + 1;
+    const heights = new Int32Array(w);
+    const out: [number, number][] = [];
+    const stack: number[] = [];
+    for (let r = r0; r <= r1; r++) {
+      for (let j = 0; j < w; j++) {
+        const v = this.vertexAt[r * this.cols + c0 + j]!;
+        heights[j] = v >= 0 && set.has(v) ? heights[j]! + 1 : 0;
+      }
+      stack.length = 0;
+      for (let j = 0; j <= w; j++) {
+        const h = j < w ? heights[j]! : 0;
+        let start = j;
+        while (stack.length && heights[stack[stack.length - 1]!]! >= h) {
+          const top = stack.pop()!;
+          const height = heights[top]!;
+          const left = stack.length ? stack[stack.length - 1]! + 1 : 0;
+          if (height > 0) out.push([height, j - left]);
+          start = top;
+        }
+        void start;
+        stack.push(j);
+      }
+    }
+    return out;
+  }
+
   canonical(set: Bitset): CanonicalShape {
     let r0 = Infinity;
     let r1 = -1;

@@ -1,3 +1,4 @@
+import { floorLog2, grid2RankNumber } from '../formulas/closed-forms';
 import { Bitset } from '../graph/bitset';
 import type { Graph } from '../graph/graph';
 import { BitsetMemo, type MemoEntry } from './bitset-memo';
@@ -28,6 +29,8 @@ export class TreeDepthSearch {
   private readonly byDegree: Uint32Array;
   /** For grid shapes: memo keys up to translation and the 8 symmetries of the square. */
   private readonly canon: ShapeCanon | undefined;
+  /** Proven tree-depths of full h x w rectangles (key h * 65536 + w, h <= w), for lower bounds of shapes. */
+  private readonly rectangles = new Map<number, number>();
 
   constructor(
     g: Graph,
@@ -98,7 +101,34 @@ export class TreeDepthSearch {
       frontier = next;
       ecc++;
     }
-    return Math.max(byDegeneracy, 32 - Math.clz32(ecc + 1));
+    return Math.max(byDegeneracy, 32 - Math.clz32(ecc + 1), this.rectangleBound(c));
+  }
+
+  /**
+   * For grid shapes: the best value of a full rectangle inside the set (td never grows on subgraphs): an
+   * exact value proven earlier in this search, else the closed forms for sides 1 and 2 (Bodlaender et al.
+   * 1998; Alpert 2010) and the treewidth bound min(h, w) + 1 (td >= tw + 1).
+   */
+  private rectangleBound(c: Bitset): number {
+    if (!this.canon) return 0;
+    let best = 0;
+    for (const [h0, w0] of this.canon.fullRectangles(c)) {
+      const h = Math.min(h0, w0);
+      const w = Math.max(h0, w0);
+      const known = this.rectangles.get(h * 65536 + w);
+      const value = known ?? (h === 1 ? floorLog2(w) + 1 : h === 2 ? grid2RankNumber(w) : h + 1);
+      if (value > best) best = value;
+    }
+    return best;
+  }
+
+  /** Remembers an exact value when the set is a full rectangle, for later lower bounds. */
+  private noteIfRectangle(e: MemoEntry, c: Bitset): void {
+    if (!this.canon || e.lower !== e.upper) return;
+    const dims = e.set.words[0]!; // canonical key: height << 16 | width
+    const h = dims >>> 16;
+    const w = dims & 0xffff;
+    if (c.popcount() === h * w) this.rectangles.set(Math.min(h, w) * 65536 + Math.max(h, w), e.upper);
   }
 
   private tick(): void {
@@ -118,6 +148,13 @@ export class TreeDepthSearch {
     if (known) return { e: known, shape };
     const size = c.popcount();
     return { e: this.memo.entry(key, this.cheapLowerBound(c, size), size, -1), shape };
+  }
+
+  /** The best lower bound proven so far for a vertex set: the largest over its components. */
+  provenLower(s: Bitset): number {
+    let best = 0;
+    for (const c of this.components(s)) best = Math.max(best, this.entryOf(c).e.lower);
+    return best;
   }
 
   /** Decides td(S) <= k for any vertex set S. */
@@ -142,10 +179,12 @@ export class TreeDepthSearch {
       if (fits) {
         e.upper = k;
         e.choice = shape ? shape.toCanonical(v) : v;
+        this.noteIfRectangle(e, c);
         return true;
       }
     }
     e.lower = k + 1;
+    this.noteIfRectangle(e, c);
     return false;
   }
 
