@@ -44,23 +44,29 @@ export class ShapeCanon {
     }
   }
 
-  /**
-   * The maximal full rectangles inside a set's cells (every cell of the rectangle in the set), as
-   * [height, width] pairs: the histogram-and-stack method, one pass over the bounding box per row.
-   */
-  fullRectangles(set: Bitset): [number, number][] {
+  /** The first and last row and column of the cells of `members`. */
+  private boundingBox(members: number[]): { r0: number; r1: number; c0: number; c1: number } {
     let r0 = Infinity;
     let r1 = -1;
     let c0 = Infinity;
     let c1 = -1;
-    set.forEach((v) => {
+    for (const v of members) {
       const r = this.row[v]!;
       const c = this.col[v]!;
       if (r < r0) r0 = r;
       if (r > r1) r1 = r;
       if (c < c0) c0 = c;
       if (c > c1) c1 = c;
-    });
+    }
+    return { r0, r1, c0, c1 };
+  }
+
+  /**
+   * The maximal full rectangles inside a set's cells (every cell of the rectangle in the set), as
+   * [height, width] pairs: the histogram-and-stack method, one pass over the bounding box per row.
+   */
+  fullRectangles(set: Bitset): [number, number][] {
+    const { r0, r1, c0, c1 } = this.boundingBox(set.toArray());
     const w = c1 - c0 + 1;
     const heights = new Int32Array(w);
     const out: [number, number][] = [];
@@ -73,15 +79,11 @@ export class ShapeCanon {
       stack.length = 0;
       for (let j = 0; j <= w; j++) {
         const h = j < w ? heights[j]! : 0;
-        let start = j;
         while (stack.length && heights[stack[stack.length - 1]!]! >= h) {
-          const top = stack.pop()!;
-          const height = heights[top]!;
+          const height = heights[stack.pop()!]!;
           const left = stack.length ? stack[stack.length - 1]! + 1 : 0;
           if (height > 0) out.push([height, j - left]);
-          start = top;
         }
-        void start;
         stack.push(j);
       }
     }
@@ -89,19 +91,8 @@ export class ShapeCanon {
   }
 
   canonical(set: Bitset): CanonicalShape {
-    let r0 = Infinity;
-    let r1 = -1;
-    let c0 = Infinity;
-    let c1 = -1;
     const members = set.toArray();
-    for (const v of members) {
-      const r = this.row[v]!;
-      const c = this.col[v]!;
-      if (r < r0) r0 = r;
-      if (r > r1) r1 = r;
-      if (c < c0) c0 = c;
-      if (c > c1) c1 = c;
-    }
+    const { r0, r1, c0, c1 } = this.boundingBox(members);
     const h = r1 - r0 + 1;
     const w = c1 - c0 + 1;
     let best: Uint32Array | undefined;
@@ -127,8 +118,7 @@ export class ShapeCanon {
       key,
       toCanonical: (v) => transformIndex(t, self.row[v]! - r0, self.col[v]! - c0, h, w),
       fromCanonical: (i) => {
-        const [H, W] = t < 4 ? [h, w] : [w, h];
-        void H;
+        const W = t < 4 ? w : h;
         const cr = Math.floor(i / W);
         const cc = i % W;
         const [r, c] = inverse(t, cr, cc, h, w);
