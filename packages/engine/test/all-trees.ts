@@ -33,3 +33,16 @@ export function canonicalTree(parent: number[]): string {
   const encode = (v: number, from: number): string => `(${adj[v]!.filter((w) => w !== from).map((w) => encode(w, v)).sort().join('')})`;
   return layer.map((c) => encode(c, -1)).sort()[0]!;
 }
+
+/** Every tree with 1 .. maxN vertices once up to isomorphism, as parent arrays. */
+export function* distinctTrees(maxN: number): Generator<number[]> {
+  for (let n = 1; n <= maxN; n++) {
+    const seen = new Set<string>();
+    for (const parent of recursiveTrees(n)) {
+      const key = canonicalTree(parent);
+      if (seen.has(key)) continue;
+      seen.add(key);
+      yield parent;
+    }
+  }
+}
