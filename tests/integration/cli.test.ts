@@ -46,6 +46,19 @@ describe('the cairn command', () => {
     expect(stdout.trim().split('\n').slice(-2).every((line) => line.trim().split(/\s+/).length === 3)).toBe(true);
   });
 
+  it('solve --svg and --tikz draw the certificate, one labelled cell or node per vertex', async () => {
+    const { code, stdout } = await cairn(['solve', 'grid:3x5', '--json', '--quiet', '--svg', 'g.svg', '--tikz', 'g.tex']);
+    expect(code).toBe(0);
+    const labels = SolveResult.parse(JSON.parse(stdout)).labels;
+    const svg = readFileSync(join(work, 'g.svg'), 'utf8');
+    expect(svg.startsWith('<svg xmlns="http://www.w3.org/2000/svg"')).toBe(true);
+    expect(svg.match(/<rect /g)).toHaveLength(15);
+    expect([...svg.matchAll(/>(\d+)<\/text>/g)].map((m) => Number(m[1]))).toEqual(labels);
+    const tikz = readFileSync(join(work, 'g.tex'), 'utf8');
+    expect([...tikz.matchAll(/\{(\d+)\};/g)].map((m) => Number(m[1]))).toEqual(labels);
+    expect(tikz).toMatch(/\\begin\{tikzpicture\}[\s\S]*\\end\{tikzpicture\}/);
+  });
+
   it('verify: exit 0 for a ranking, 1 with the offending path otherwise, 2 with the line for a malformed file', async () => {
     writeFileSync(join(work, 'good.csv'), '1,3,1\n2,4,2\n'); // 4 labels: the 2 x 3 rank number (Alpert 2010)
     writeFileSync(join(work, 'bad.csv'), '1,2,1\n1,3,2\n');

@@ -1,7 +1,9 @@
+import { writeFileSync } from 'node:fs';
 import type { Command } from 'commander';
 import { EnginePool } from '@cairn/engine/pool';
 import { CliError, EXIT } from '../cli-error';
 import { loadGraph, reportWarnings } from '../load-graph';
+import { rankingSvg, rankingTikz } from '../drawing';
 import { labelPicture } from '../picture';
 import { progressLine } from '../progress';
 
@@ -10,6 +12,8 @@ interface SolveFlags {
   timeLimit?: string;
   json?: boolean;
   picture?: boolean;
+  svg?: string;
+  tikz?: string;
   quiet?: boolean;
 }
 
@@ -22,8 +26,10 @@ export function solveCommand(program: Command): void {
     .option('-t, --time-limit <seconds>', 'stop the search after this long and report the bounds')
     .option('--json', 'print one JSON document (the SolveResult schema)')
     .option('--picture', 'draw the labels as a grid (grid-like graphs)')
+    .option('--svg <file>', 'write the ranking as an SVG picture')
+    .option('--tikz <file>', 'write the ranking as a TikZ picture')
     .option('-q, --quiet', 'no progress or warnings on stderr')
-    .addHelpText('after', '\nExamples:\n  cairn solve grid:4x6\n  cairn solve staircase:6 --picture\n  cairn solve plate.mtx --method bounds --json\n  cairn solve grid:8x8 --time-limit 30')
+    .addHelpText('after', '\nExamples:\n  cairn solve grid:4x6\n  cairn solve staircase:6 --picture --svg s6.svg --tikz s6.tex\n  cairn solve plate.mtx --method bounds --json\n  cairn solve grid:8x8 --time-limit 30')
     .action(async (spec: string, flags: SolveFlags) => {
       if (!['auto', 'exact', 'bounds', 'formula'].includes(flags.method)) throw new CliError(`--method must be auto, exact, bounds or formula, got ${flags.method}`);
       const seconds = flags.timeLimit === undefined ? undefined : Number(flags.timeLimit);
@@ -56,6 +62,8 @@ export function solveCommand(program: Command): void {
             process.stdout.write(picture ?? '  (no picture: the graph is not grid-like)\n');
           }
         }
+        if (flags.svg) writeFileSync(flags.svg, rankingSvg(loaded.graph, s.labels));
+        if (flags.tikz) writeFileSync(flags.tikz, rankingTikz(loaded.graph, s.labels));
         if (s.rankNumber === null) process.exitCode = EXIT.limitReached;
       } finally {
         process.off('SIGINT', onSigint);
