@@ -6,6 +6,7 @@ export { Graph } from './graph/graph';
 export type { Family, GridLayout, MaskShape } from './graph/family';
 export { Bitset } from './graph/bitset';
 export { componentIds, componentsOf } from './graph/components';
+export { isForest } from './graph/is-forest';
 export { checkVertexCount, graphFromEdges } from './graph/from-edges';
 export { MAX_EDGES, MAX_VERTICES } from './graph/limits';
 

@@ -1,5 +1,5 @@
 import type { Command } from 'commander';
-import { assemblyPlan, edgeRankingByLineGraph, optimalTreeEdgeRanking, verifyEdgeRanking } from '@cairn/engine';
+import { assemblyPlan, edgeRankingByLineGraph, isForest, optimalTreeEdgeRanking, verifyEdgeRanking } from '@cairn/engine';
 import { loadGraph } from '../load-graph';
 
 export function edgeRankCommand(program: Command): void {
@@ -11,7 +11,7 @@ export function edgeRankCommand(program: Command): void {
     .addHelpText('after', '\nExamples:\n  cairn edge-rank tree:cabinet.parents\n  cairn edge-rank assembly.txt --json')
     .action((spec: string, flags: { json?: boolean }) => {
       const { graph } = loadGraph(spec);
-      const tree = graph.edgeCount < graph.vertexCount && isForest(graph);
+      const tree = isForest(graph);
       const labels = tree ? optimalTreeEdgeRanking(graph) : edgeRankingByLineGraph(graph).labels;
       const verdict = verifyEdgeRanking(graph, labels);
       const steps = assemblyPlan(graph, labels);
@@ -25,17 +25,4 @@ export function edgeRankCommand(program: Command): void {
         process.stdout.write(`  step ${s.step}: ${s.pairs.length} joint(s): ${shown}\n`);
       }
     });
-}
-
-function isForest(g: import('@cairn/engine').Graph): boolean {
-  const seen = new Uint8Array(g.vertexCount);
-  let components = 0;
-  for (let s = 0; s < g.vertexCount; s++) {
-    if (seen[s]) continue;
-    components++;
-    const stack = [s];
-    seen[s] = 1;
-    while (stack.length) for (const w of g.neighbours(stack.pop()!)) if (!seen[w]) (seen[w] = 1), stack.push(w);
-  }
-  return g.edgeCount === g.vertexCount - components;
 }

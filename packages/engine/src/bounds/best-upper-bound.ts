@@ -1,4 +1,5 @@
 import type { Graph } from '../graph/graph';
+import { isForest } from '../graph/is-forest';
 import { greedyEliminationRanking } from './greedy-elimination';
 import { MidlineSplit } from './midline-split';
 import { nestedDissectionRanking } from './nested-dissection';
@@ -22,7 +23,7 @@ export function bestUpperBound(g: Graph): BestUpperBound {
     const empty: UpperBound = { value: 0, labels: new Int32Array(0), construction: 'empty', argument: 'the empty graph needs no labels' };
     return { best: empty, all: [empty] };
   }
-  if (g.edgeCount <= n - 1 && isForest(g)) {
+  if (isForest(g)) {
     const labels = optimalTreeRanking(g);
     all.push({ value: maxOf(labels), labels, construction: 'tree-optimal', argument: 'optimal ranking of a forest (Schäffer, Inform. Process. Lett. 1989)' });
   }
@@ -37,28 +38,4 @@ function maxOf(labels: Int32Array): number {
   let m = 0;
   for (const l of labels) if (l > m) m = l;
   return m;
-}
-
-/** True when g has no cycle: every component has one edge fewer than vertices. */
-function isForest(g: Graph): boolean {
-  const n = g.vertexCount;
-  const seen = new Uint8Array(n);
-  const stack: number[] = [];
-  let components = 0;
-  for (let s = 0; s < n; s++) {
-    if (seen[s]) continue;
-    components++;
-    seen[s] = 1;
-    stack.push(s);
-    while (stack.length) {
-      const v = stack.pop()!;
-      for (const w of g.neighbours(v)) {
-        if (!seen[w]) {
-          seen[w] = 1;
-          stack.push(w);
-        }
-      }
-    }
-  }
-  return g.edgeCount === n - components;
 }

@@ -29,7 +29,7 @@ export type EdgeRankingVerdict =
  * Labels that are not one positive whole number per edge are a LabelError, not a verdict.
  */
 export function verifyEdgeRanking(g: Graph, edgeLabels: ArrayLike<number>): EdgeRankingVerdict {
-  const { order, groupEnds, top, distinct } = orderEdgesByLabel(g, edgeLabels);
+  const { order, groupEnds, top } = orderEdgesByLabel(g, edgeLabels);
   const index = indexEdges(g);
   const { ends } = index;
   const n = g.vertexCount;
@@ -50,7 +50,7 @@ export function verifyEdgeRanking(g: Graph, edgeLabels: ArrayLike<number>): Edge
       for (let side = 0; side < 2; side++) {
         const r = find(ends[2 * e + side]!);
         if (stampLabel[r] === l && stampEdge[r] !== e) {
-          return { valid: false, labelsUsed: distinct, maxLabel: top, violation: nearestClash(g, index, edgeLabels, l, e) };
+          return { valid: false, labelsUsed: groupEnds.length, maxLabel: top, violation: nearestClash(g, index, edgeLabels, l, e) };
         }
         stampLabel[r] = l;
         stampEdge[r] = e;
@@ -67,7 +67,7 @@ export function verifyEdgeRanking(g: Graph, edgeLabels: ArrayLike<number>): Edge
     }
     start = end;
   }
-  return { valid: true, labelsUsed: distinct, maxLabel: top };
+  return { valid: true, labelsUsed: groupEnds.length, maxLabel: top };
 }
 
 /**

@@ -9,8 +9,6 @@ export interface LabelOrder {
   groupEnds: Uint32Array;
   /** The largest label. */
   top: number;
-  /** How many different labels occur (groupEnds.length). */
-  distinct: number;
 }
 
 /**
@@ -48,7 +46,7 @@ export function orderLabels(labels: ArrayLike<number>, count: number, noun: stri
   for (let l = 1, k = 0; l <= top; l++) if (start[l + 1]! > start[l]!) groupEnds[k++] = start[l + 1]!;
   const order = new Uint32Array(n);
   for (let v = 0; v < n; v++) order[start[labels[v]!]!++] = v;
-  return { order, groupEnds, top, distinct };
+  return { order, groupEnds, top };
 }
 
 function comparisonOrder(labels: ArrayLike<number>, top: number): LabelOrder {
@@ -56,5 +54,5 @@ function comparisonOrder(labels: ArrayLike<number>, top: number): LabelOrder {
   const order = Uint32Array.from({ length: n }, (_, i) => i).sort((a, b) => labels[a]! - labels[b]! || a - b);
   const ends: number[] = [];
   for (let i = 1; i <= n; i++) if (i === n || labels[order[i]!] !== labels[order[i - 1]!]) ends.push(i);
-  return { order, groupEnds: Uint32Array.from(ends), top, distinct: ends.length };
+  return { order, groupEnds: Uint32Array.from(ends), top };
 }

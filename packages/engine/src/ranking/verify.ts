@@ -23,7 +23,7 @@ export type RankingVerdict =
  */
 export function verifyRanking(g: Graph, labels: ArrayLike<number>): RankingVerdict {
   const n = g.vertexCount;
-  const { order, groupEnds, top, distinct } = orderByLabel(g, labels);
+  const { order, groupEnds, top } = orderByLabel(g, labels);
   const label = labels instanceof Int32Array ? labels : Int32Array.from(labels); // one array kind: monomorphic loops
   const { offsets, targets } = g;
   // Union-find inlined (the hot loop of the whole engine): parent -1 is not yet added, roots point to
@@ -51,7 +51,7 @@ export function verifyRanking(g: Graph, labels: ArrayLike<number>): RankingVerdi
         while (parent[rw] !== rw) rw = parent[rw] = parent[parent[rw]!]!;
         if (rw === rv) continue;
         if (stamp[rw] === l) {
-          return { valid: false, labelsUsed: distinct, maxLabel: top, violation: nearestClash(g, label, l, v) };
+          return { valid: false, labelsUsed: groupEnds.length, maxLabel: top, violation: nearestClash(g, label, l, v) };
         }
         // Union by size keeps the trees shallow; the joined set holds v, so it carries the stamp.
         if (size[rw]! > size[rv]!) {
@@ -67,7 +67,7 @@ export function verifyRanking(g: Graph, labels: ArrayLike<number>): RankingVerdi
     }
     start = end;
   }
-  return { valid: true, labelsUsed: distinct, maxLabel: top };
+  return { valid: true, labelsUsed: groupEnds.length, maxLabel: top };
 }
 
 /**

@@ -9,6 +9,7 @@ import { torusGraph } from '../families/torus';
 import { randomTree, treeFromParents } from '../families/tree';
 import type { Graph } from '../graph/graph';
 import { detectFormat, parseMaskText, readGraph, type GraphFormat, type ReadResult } from '../io/index';
+import { decodeTextInput } from '../io/text-input';
 import type { GraphSpec } from './graph-spec';
 import { parseParentArray } from './parent-array-text';
 import { parseGraphSpec } from './parse-spec';
@@ -20,8 +21,6 @@ function load(loader: FileLoader | undefined, path: string, spec: string): strin
   if (!loader) throw new SpecError(`${spec} names a file, and no way to read files was given`);
   return loader(path);
 }
-
-const asText = (content: string | Uint8Array) => (typeof content === 'string' ? content : new TextDecoder().decode(content));
 
 /** Builds the graph a spec names, reading any file it names through `loader`. */
 export function graphFromSpec(spec: GraphSpec | string, loader?: FileLoader): Graph {
@@ -73,7 +72,7 @@ function familyGraph(s: Exclude<GraphSpec, { family: 'file' }>, loader: FileLoad
       return maskGraph(parseMaskText(text));
     }
     case 'tree': {
-      const parents = s.parents ?? (s.file !== undefined ? parseParentArray(asText(load(loader, s.file, `tree:${s.file}`))) : undefined);
+      const parents = s.parents ?? (s.file !== undefined ? parseParentArray(decodeTextInput(load(loader, s.file, `tree:${s.file}`), 'parent-array')) : undefined);
       if (parents === undefined) throw new SpecError('tree: expected a file or the parent array');
       return treeFromParents(parents);
     }
