@@ -5,7 +5,7 @@ import { join } from 'node:path';
 import { promisify } from 'node:util';
 import { describe, expect, it } from 'vitest';
 import { builtServerEntry } from '../support/built-server';
-import { repoRoot, serverEnv } from '../support/test-env';
+import { repoRoot, serverEnv, withoutStandIns } from '../support/test-env';
 
 const run = promisify(execFile);
 
@@ -22,7 +22,7 @@ describe('built entry points', () => {
     const port = (holder.address() as { port: number }).port;
     try {
       const err = await run(process.execPath, [builtServerEntry], {
-        env: { ...process.env, ...serverEnv({ CAIRN_PORT: String(port), CAIRN_DEV_SERVICES: '0' }) },
+        env: { ...process.env, ...serverEnv({ CAIRN_PORT: String(port), CAIRN_DEV_SERVICES: '0', ...withoutStandIns }) },
       }).then(
         () => undefined,
         (e: { code: number; stderr: string }) => e,

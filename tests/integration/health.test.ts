@@ -1,13 +1,13 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { HealthResponse } from '@cairn/schema';
 import { createLogger, loadConfig, startServer, type RunningServer } from '@cairn/server';
-import { serverEnv } from '../support/test-env';
+import { serverEnv, withoutStandIns } from '../support/test-env';
 
 const logger = createLogger('silent');
 let server: RunningServer;
 
 beforeAll(async () => {
-  server = await startServer(loadConfig(serverEnv({ CAIRN_PORT: '0', CAIRN_DEV_SERVICES: '0' })), logger);
+  server = await startServer(loadConfig(serverEnv({ CAIRN_PORT: '0', CAIRN_DEV_SERVICES: '0', ...withoutStandIns })), logger);
 });
 afterAll(() => server.close());
 
@@ -20,7 +20,7 @@ describe('GET /api/health on the real PostgreSQL', () => {
   });
 
   it('answers 503 with the reason PostgreSQL gives for a database that does not exist', async () => {
-    const other = await startServer(loadConfig(serverEnv({ CAIRN_PORT: '0', CAIRN_DEV_SERVICES: '0', CAIRN_DB_NAME: 'cairn_missing_test' })), logger);
+    const other = await startServer(loadConfig(serverEnv({ CAIRN_PORT: '0', CAIRN_DEV_SERVICES: '0', ...withoutStandIns, CAIRN_DB_NAME: 'cairn_missing_test' })), logger);
     try {
       const res = await fetch(`${other.url}/api/health`);
       expect(res.status).toBe(503);

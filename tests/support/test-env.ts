@@ -28,3 +28,13 @@ export function serverEnv(extra: Record<string, string> = {}): Record<string, st
     ...extra,
   };
 }
+
+/**
+ * What a server needs when the local stand-ins are off: a session secret and GitHub credentials. These
+ * are placeholders; tests that use them never sign in, so nothing goes to GitHub.
+ */
+export const withoutStandIns: Record<string, string> = {
+  CAIRN_SESSION_SECRET: 'test-session-secret-of-cairn',
+  CAIRN_GITHUB_CLIENT_ID: 'unused-client-id',
+  CAIRN_GITHUB_CLIENT_SECRET: 'unused-client-secret',
+};

@@ -1,19 +1,22 @@
 import express, { type Express } from 'express';
 import { pinoHttp } from 'pino-http';
-import type { Database } from './db/database';
+import { installAuth } from './auth/install-auth';
+import type { ServerContext } from './context';
+import type { Jobs } from './jobs/jobs';
 import { apiNotFound, errorHandler } from './http/errors';
+import { rateLimits, securityHeaders } from './http/security';
 import { webAppRouter } from './http/web-app';
-import type { Logger } from './logger';
 import { healthRouter } from './routes/health.router';
+import { v1Routers } from './routes/v1';
 
-export interface AppDeps {
-  db: Database;
-  logger: Logger;
+export interface AppContext extends ServerContext {
+  jobs: Jobs;
   /** The folder of the built web app; without it only the API is served. */
   webDist?: string | undefined;
 }
 
-export function createApp({ db, logger, webDist }: AppDeps): Express {
+export function createApp(ctx: AppContext): Express {
+  const { db, logger, webDist } = ctx;
   const app = express();
   app.disable('x-powered-by');
   app.set('trust proxy', 'loopback');
@@ -25,10 +28,14 @@ export function createApp({ db, logger, webDist }: AppDeps): Express {
       customLogLevel: (_req, res, err) => (err || res.statusCode >= 500 ? 'error' : res.statusCode >= 400 ? 'warn' : 'info'),
     }),
   );
+  for (const h of securityHeaders(ctx)) app.use(h);
   app.use(express.json({ limit: '1mb' }));
+  installAuth(app, ctx);
+  for (const h of rateLimits(ctx)) app.use('/api', h);
 
   const api = express.Router();
   api.use(healthRouter(db));
+  for (const r of v1Routers(ctx)) api.use('/v1', r);
   api.use(apiNotFound);
   app.use('/api', api);
 

@@ -21,6 +21,18 @@ const ConfigSchema = z.object({
   CAIRN_DEV_SERVICES: flag(true),
   CAIRN_DEV_PORT: port(4781),
   CAIRN_SMTP_PORT: port(4782),
+  CAIRN_PUBLIC_URL: z.string().url().optional(),
+  CAIRN_SESSION_SECRET: z.string().min(16, 'at least 16 characters').optional(),
+  CAIRN_GITHUB_CLIENT_ID: z.string().min(1).optional(),
+  CAIRN_GITHUB_CLIENT_SECRET: z.string().min(1).optional(),
+  CAIRN_ADMIN_LOGIN: z.string().min(1).optional(),
+  CAIRN_SMTP_HOST: z.string().min(1).optional(),
+  CAIRN_MAIL_FROM: z.string().min(3).default('Cairn <cairn@cairn.invalid>'),
+  CAIRN_MAIL_AFTER_SECONDS: z.coerce.number().min(0).default(30),
+  CAIRN_RUN_CONCURRENCY: z.coerce.number().int().min(0).max(64).default(1),
+  CAIRN_ENGINE_THREADS: z.coerce.number().int().min(1).max(64).optional(),
+  CAIRN_UPLOAD_LIMIT_MB: z.coerce.number().min(0.001).max(1024).default(20),
+  CAIRN_RATE_LIMIT_PER_MINUTE: z.coerce.number().int().min(1).default(600),
   CAIRN_LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
 });
 
@@ -33,6 +45,23 @@ export interface Config {
   devPort: number;
   smtpPort: number;
   logLevel: z.infer<typeof ConfigSchema>['CAIRN_LOG_LEVEL'];
+  /** Where people reach the server (links in mail, the OAuth callback). */
+  publicUrl: string;
+  /** Signs session cookies; a fixed local value only when the local stand-ins run. */
+  sessionSecret: string;
+  /** Real GitHub when both are set; otherwise the local fake provider (which needs devServices). */
+  github: { clientId: string; clientSecret: string } | undefined;
+  /** The login made admin on first sign-in; without it the first member to sign in is admin. */
+  adminLogin: string | undefined;
+  smtp: { host: string; port: number };
+  mailFrom: string;
+  /** Runs that take longer than this send their owner a "run finished" mail (when opted in). */
+  mailAfterSeconds: number;
+  /** Runs this process works on at once; 0 serves the API only (another process runs the queue). */
+  runConcurrency: number;
+  engineThreads: number | undefined;
+  uploadLimitBytes: number;
+  rateLimitPerMinute: number;
 }
 
 export class ConfigError extends Error {}
@@ -47,6 +76,17 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
   const e = parsed.data;
   const databaseUrl =
     e.CAIRN_DATABASE_URL ?? `postgres://${encodeURIComponent(e.CAIRN_DB_USER)}@${e.CAIRN_DB_HOST}:${e.CAIRN_DB_PORT}/${e.CAIRN_DB_NAME}`;
+  if ((e.CAIRN_GITHUB_CLIENT_ID === undefined) !== (e.CAIRN_GITHUB_CLIENT_SECRET === undefined)) {
+    throw new ConfigError('invalid configuration in the environment:\n  CAIRN_GITHUB_CLIENT_ID and CAIRN_GITHUB_CLIENT_SECRET go together: set both or neither');
+  }
+  if (!e.CAIRN_SESSION_SECRET && !e.CAIRN_DEV_SERVICES) {
+    throw new ConfigError('invalid configuration in the environment:\n  CAIRN_SESSION_SECRET: required when CAIRN_DEV_SERVICES is off');
+  }
+  if (!e.CAIRN_GITHUB_CLIENT_ID && !e.CAIRN_DEV_SERVICES) {
+    throw new ConfigError(
+      'invalid configuration in the environment:\n  CAIRN_GITHUB_CLIENT_ID: required when CAIRN_DEV_SERVICES is off (sign-in needs GitHub or the local provider)',
+    );
+  }
   return {
     host: e.CAIRN_HOST,
     port: e.CAIRN_PORT,
@@ -56,5 +96,16 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
     devPort: e.CAIRN_DEV_PORT,
     smtpPort: e.CAIRN_SMTP_PORT,
     logLevel: e.CAIRN_LOG_LEVEL,
+    publicUrl: (e.CAIRN_PUBLIC_URL ?? `http://${e.CAIRN_HOST}:${e.CAIRN_PORT}`).replace(/\/+$/, ''),
+    sessionSecret: e.CAIRN_SESSION_SECRET ?? 'cairn-local-session-secret-not-for-production',
+    github: e.CAIRN_GITHUB_CLIENT_ID && e.CAIRN_GITHUB_CLIENT_SECRET ? { clientId: e.CAIRN_GITHUB_CLIENT_ID, clientSecret: e.CAIRN_GITHUB_CLIENT_SECRET } : undefined,
+    adminLogin: e.CAIRN_ADMIN_LOGIN,
+    smtp: { host: e.CAIRN_SMTP_HOST ?? e.CAIRN_HOST, port: e.CAIRN_SMTP_PORT },
+    mailFrom: e.CAIRN_MAIL_FROM,
+    mailAfterSeconds: e.CAIRN_MAIL_AFTER_SECONDS,
+    runConcurrency: e.CAIRN_RUN_CONCURRENCY,
+    engineThreads: e.CAIRN_ENGINE_THREADS,
+    uploadLimitBytes: Math.round(e.CAIRN_UPLOAD_LIMIT_MB * 1024 * 1024),
+    rateLimitPerMinute: e.CAIRN_RATE_LIMIT_PER_MINUTE,
   };
 }

@@ -1,11 +1,14 @@
 import { createServer } from 'node:http';
 import { createApp } from './app';
 import type { Config } from './config';
+import type { ServerContext } from './context';
 import { createDataSource } from './db/data-source';
 import { Database } from './db/database';
 import { startDevServices, type DevServices } from './dev/dev-services';
 import { closeServer, listen } from './http/listen';
+import { startJobs } from './jobs/jobs';
 import type { Logger } from './logger';
+import { createMailer } from './mail/mailer';
 import { defaultWebDist } from './web-dist';
 
 export interface RunningServer {
@@ -15,16 +18,22 @@ export interface RunningServer {
   close(): Promise<void>;
 }
 
-/** Starts the API (and the local stand-ins when configured); the database may still be away. */
+/** Starts the API, its run workers (when configured) and the local stand-ins; the database may still be away. */
 export async function startServer(config: Config, logger: Logger): Promise<RunningServer> {
   const db = new Database(createDataSource(config.databaseUrl), logger);
   const dev = config.devServices ? await startDevServices(config.host, config.devPort, config.smtpPort, logger) : undefined;
-  const app = createApp({ db, logger, webDist: config.webDist ?? defaultWebDist() });
+  const smtp = dev ? { host: config.host, port: dev.smtpPort } : config.smtp;
+  const mailer = createMailer(smtp, config.mailFrom, logger, { localCatcher: Boolean(dev) });
+  const ctx: ServerContext = { config, db, logger, mailer };
+  const jobs = startJobs();
+  const app = createApp({ ...ctx, jobs, webDist: config.webDist ?? defaultWebDist() });
   const server = createServer(app);
   let port: number;
   try {
     port = await listen(server, config.host, config.port, 'CAIRN_PORT');
   } catch (err) {
+    await jobs.close();
+    mailer.close();
     await dev?.close();
     throw err;
   }
@@ -35,6 +44,8 @@ export async function startServer(config: Config, logger: Logger): Promise<Runni
     dev,
     close: async () => {
       await closeServer(server);
+      await jobs.close();
+      mailer.close();
       await dev?.close();
       await db.close();
     },

@@ -2,6 +2,7 @@ import { createServer, type Server } from 'node:http';
 import type { AddressInfo } from 'node:net';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createApp, createDataSource, createLogger, Database } from '../src/index';
+import { testContext } from './support/test-context';
 
 // A database URL on a port where nothing listens (port 9, discard, is closed on loopback here).
 const unreachable = 'postgres://cairn@127.0.0.1:9/cairn_unit';
@@ -11,7 +12,7 @@ const logger = createLogger('silent');
 const db = new Database(createDataSource(unreachable), logger);
 
 beforeAll(async () => {
-  server = createServer(createApp({ db, logger }));
+  server = createServer(createApp(testContext(db, { logger })));
   await new Promise<void>((r) => server.listen(0, '127.0.0.1', r));
   base = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
 });

@@ -10,10 +10,16 @@ describe('loadConfig', () => {
   });
 
   it('takes the ports and database name from the environment', () => {
-    const c = loadConfig({ CAIRN_PORT: '5001', CAIRN_DB_PORT: '6001', CAIRN_DB_NAME: 'cairn_test', CAIRN_DEV_SERVICES: '0' });
+    const c = loadConfig({ CAIRN_PORT: '5001', CAIRN_DB_PORT: '6001', CAIRN_DB_NAME: 'cairn_test', CAIRN_DEV_SERVICES: '0', CAIRN_SESSION_SECRET: 'a-long-enough-secret', CAIRN_GITHUB_CLIENT_ID: 'id', CAIRN_GITHUB_CLIENT_SECRET: 'secret' });
     expect(c.port).toBe(5001);
     expect(c.databaseUrl).toBe('postgres://cairn@127.0.0.1:6001/cairn_test');
     expect(c.devServices).toBe(false);
+  });
+
+  it('refuses to run without the local stand-ins unless real sign-in and a session secret are set', () => {
+    expect(() => loadConfig({ CAIRN_DEV_SERVICES: '0' })).toThrow(/CAIRN_SESSION_SECRET/);
+    expect(() => loadConfig({ CAIRN_DEV_SERVICES: '0', CAIRN_SESSION_SECRET: 'a-long-enough-secret' })).toThrow(/CAIRN_GITHUB_CLIENT_ID/);
+    expect(() => loadConfig({ CAIRN_GITHUB_CLIENT_ID: 'only-the-id' })).toThrow(/go together/);
   });
 
   it('names each wrong variable', () => {

@@ -1,11 +1,17 @@
 import 'reflect-metadata';
 import { DataSource } from 'typeorm';
+import { ApiKey } from '../entities/api-key.entity';
+import { AtlasEntry } from '../entities/atlas-entry.entity';
+import { Run } from '../entities/run.entity';
+import { StoredGraph } from '../entities/stored-graph.entity';
+import { Sweep } from '../entities/sweep.entity';
 import { User } from '../entities/user.entity';
 import { CreateUsers1764633600000 } from '../migrations/1764633600000-create-users';
+import { CreateRunsKeysGraphs1764720000000 } from '../migrations/1764720000000-create-runs-keys-graphs';
 
 /** Entity and migration classes are listed by hand: the bundlers emit no decorator metadata and no globs. */
-export const entities = [User];
-export const migrations = [CreateUsers1764633600000];
+export const entities = [User, ApiKey, StoredGraph, Run, Sweep, AtlasEntry];
+export const migrations = [CreateUsers1764633600000, CreateRunsKeysGraphs1764720000000];
 
 export function createDataSource(databaseUrl: string): DataSource {
   return new DataSource({

@@ -24,6 +24,10 @@ export class User {
   @Column({ type: 'enum', enum: USER_ROLES, enumName: 'user_role', default: 'viewer' })
   role!: UserRole;
 
+  /** Whether a "run finished" e-mail goes out for this member's long runs. */
+  @Column({ name: 'notify_on_finish', type: 'boolean', default: true })
+  notifyOnFinish!: boolean;
+
   @CreateDateColumn({ name: 'created_at', type: 'timestamptz' })
   createdAt!: Date;
 

@@ -1,0 +1,2 @@
+// Filled by the server work; see apps/server.
+export {};
