@@ -1,5 +1,6 @@
 import { createServer } from 'node:http';
 import { createApp } from './app';
+import { signInProvider } from './auth/sign-in-provider';
 import type { Config } from './config';
 import type { ServerContext } from './context';
 import { createDataSource } from './db/data-source';
@@ -24,7 +25,7 @@ export async function startServer(config: Config, logger: Logger): Promise<Runni
   const dev = config.devServices ? await startDevServices(config.host, config.devPort, config.smtpPort, logger) : undefined;
   const smtp = dev ? { host: config.host, port: dev.smtpPort } : config.smtp;
   const mailer = createMailer(smtp, config.mailFrom, logger, { localCatcher: Boolean(dev) });
-  const ctx: ServerContext = { config, db, logger, mailer };
+  const ctx: ServerContext = { config, db, logger, mailer, signIn: signInProvider(config, dev?.url) };
   const jobs = startJobs();
   const app = createApp({ ...ctx, jobs, webDist: config.webDist ?? defaultWebDist() });
   const server = createServer(app);

@@ -24,6 +24,7 @@ export function testContext(db: Database, overrides: Partial<AppContext> = {}, e
     db,
     logger: createLogger('silent'),
     mailer: recordingMailer(),
+    signIn: undefined,
     jobs: { close: async () => {} },
     ...overrides,
   };
