@@ -2,6 +2,7 @@ import express, { type Express } from 'express';
 import { pinoHttp } from 'pino-http';
 import { installAuth } from './auth/install-auth';
 import type { ServerContext } from './context';
+import type { CaughtMail } from './dev/mail-catcher';
 import type { Jobs } from './jobs/jobs';
 import { apiNotFound, errorHandler } from './http/errors';
 import { rateLimits, securityHeaders } from './http/security';
@@ -11,6 +12,8 @@ import { v1Routers } from './routes/v1';
 
 export interface AppContext extends ServerContext {
   jobs: Jobs;
+  /** The local mail catcher's messages, when it runs in this process (development and tests). */
+  devMailbox?: { messages(): readonly CaughtMail[] } | undefined;
   /** The folder of the built web app; without it only the API is served. */
   webDist?: string | undefined;
 }
@@ -29,7 +32,9 @@ export function createApp(ctx: AppContext): Express {
     }),
   );
   for (const h of securityHeaders(ctx)) app.use(h);
-  app.use(express.json({ limit: '1mb' }));
+  // Verification carries a label per vertex and parses its own, larger bodies.
+  const json = express.json({ limit: '1mb' });
+  app.use((req, res, next) => (req.path === '/api/v1/verify' ? next() : json(req, res, next)));
   installAuth(app, ctx);
   for (const h of rateLimits(ctx)) app.use('/api', h);
 

@@ -1,5 +1,6 @@
 import { createServer } from 'node:http';
 import { createApp } from './app';
+import { closeAuth } from './auth/install-auth';
 import { signInProvider } from './auth/sign-in-provider';
 import type { Config } from './config';
 import type { ServerContext } from './context';
@@ -26,13 +27,15 @@ export async function startServer(config: Config, logger: Logger): Promise<Runni
   const smtp = dev ? { host: config.host, port: dev.smtpPort } : config.smtp;
   const mailer = createMailer(smtp, config.mailFrom, logger, { localCatcher: Boolean(dev) });
   const ctx: ServerContext = { config, db, logger, mailer, signIn: signInProvider(config, dev?.url) };
-  const jobs = startJobs();
-  const app = createApp({ ...ctx, jobs, webDist: config.webDist ?? defaultWebDist() });
+  // The run queue (and ctx.config.runConcurrency run workers); it waits for the database if that is away.
+  const jobs = startJobs(ctx);
+  const app = createApp({ ...ctx, jobs, devMailbox: dev?.mail, webDist: config.webDist ?? defaultWebDist() });
   const server = createServer(app);
   let port: number;
   try {
     port = await listen(server, config.host, config.port, 'CAIRN_PORT');
   } catch (err) {
+    await closeAuth(app);
     await jobs.close();
     mailer.close();
     await dev?.close();
@@ -45,6 +48,7 @@ export async function startServer(config: Config, logger: Logger): Promise<Runni
     dev,
     close: async () => {
       await closeServer(server);
+      await closeAuth(app);
       await jobs.close();
       mailer.close();
       await dev?.close();

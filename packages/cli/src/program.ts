@@ -5,6 +5,7 @@ import { convertCommand } from './commands/convert';
 import { edgeRankCommand } from './commands/edge-rank';
 import { formulaCommand } from './commands/formula';
 import { planCommand } from './commands/plan';
+import { remoteCommand } from './commands/remote';
 import { solveCommand } from './commands/solve';
 import { sweepCommand } from './commands/sweep';
 import { verifyCommand } from './commands/verify';
@@ -21,6 +22,6 @@ export function buildProgram(): Command {
     );
   // Errors become exceptions (for every command added below), so the entry point picks the exit status.
   program.exitOverride().configureOutput({ outputError: (text, write) => write(text) });
-  for (const add of [solveCommand, verifyCommand, boundsCommand, formulaCommand, sweepCommand, planCommand, edgeRankCommand, convertCommand]) add(program);
+  for (const add of [solveCommand, verifyCommand, boundsCommand, formulaCommand, sweepCommand, planCommand, edgeRankCommand, convertCommand, remoteCommand]) add(program);
   return program;
 }

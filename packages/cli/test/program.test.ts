@@ -17,7 +17,7 @@ describe('cairn commands', () => {
   it('has the batch commands, each with examples in its help', () => {
     const program = buildProgram();
     const names = program.commands.map((c) => c.name());
-    expect(names).toEqual(['solve', 'verify', 'bounds', 'formula', 'sweep', 'plan', 'edge-rank', 'convert']);
+    expect(names).toEqual(['solve', 'verify', 'bounds', 'formula', 'sweep', 'plan', 'edge-rank', 'convert', 'remote']);
     for (const c of program.commands) {
       let help = '';
       c.configureOutput({ writeOut: (s) => (help += s) });

@@ -37,6 +37,7 @@ export { eliminationOrder, stepPlan } from './ranking/step-plan';
 export type { PlanStep } from './ranking/step-plan';
 
 export * from './io/index';
+export * from './drawing/index';
 
 export {
   CLOSED_FORMS,

@@ -6,3 +6,6 @@ export { ApiScope, Role, RunStatus, Visibility } from './access';
 export * from './api-auth';
 export * from './api-runs';
 export * from './api-uploads';
+export { RunPlan } from './run-plan';
+export { CaughtMailList, CaughtMailView } from './dev-mail';
+export { QuickAnswer, QuickQuery } from './quick-answer';

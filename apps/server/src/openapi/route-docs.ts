@@ -19,6 +19,11 @@ export interface RouteDoc {
   status?: number;
   /** Content type of the answer when it is not JSON (text/csv, image/svg+xml, text/event-stream). */
   responseType?: string;
+  /**
+   * Error statuses the route answers beyond those the document adds by itself (400 for routes that take
+   * input, 401 and 403 for routes that need a permission), e.g. [404, 409, 413].
+   */
+  errors?: number[];
 }
 
 const routeDocs = new Map<string, RouteDoc>();

@@ -1,7 +1,39 @@
+import { AtlasEntryView, AtlasKeyParams, AtlasList, AtlasQuery } from '@cairn/schema';
 import { Router } from 'express';
 import type { AppContext } from '../app';
+import { connectOrUnavailable } from '../auth/database';
+import { requirePermission } from '../auth/require';
+import { parseParams, parseQuery } from '../http/validate';
+import { documentRoute } from '../openapi/route-docs';
+import { findAtlasEntry, listAtlas } from '../services/atlas-query';
 
-/** Placeholder: this part of the API has not landed yet. */
-export function atlasRouter(_ctx: AppContext): Router {
-  return Router();
+const TAG = 'atlas';
+
+/** The atlas: every value Cairn has established, one entry per graph; open to anonymous readers too. */
+export function atlasRouter(ctx: AppContext): Router {
+  const router = Router();
+
+  documentRoute({
+    method: 'get',
+    path: '/api/v1/atlas',
+    tag: TAG,
+    summary: 'Atlas entries by family, sizes (rows, cols or ranges; rows <= cols for grids and tori) and exactness',
+    needs: 'atlas:read',
+    query: AtlasQuery,
+    response: AtlasList,
+  });
+  router.get('/atlas', requirePermission('atlas:read'), async (req, res) => {
+    const query = parseQuery(AtlasQuery, req);
+    const body: AtlasList = await listAtlas(await connectOrUnavailable(ctx.db), query);
+    res.json(body);
+  });
+
+  documentRoute({ method: 'get', path: '/api/v1/atlas/:key', tag: TAG, summary: 'One atlas entry, by its key or any spec of the same graph (grid:9x4 finds grid:4x9)', needs: 'atlas:read', params: AtlasKeyParams, response: AtlasEntryView, errors: [404] });
+  router.get('/atlas/:key', requirePermission('atlas:read'), async (req, res) => {
+    const { key } = parseParams(AtlasKeyParams, req);
+    const body: AtlasEntryView = await findAtlasEntry(await connectOrUnavailable(ctx.db), key);
+    res.json(body);
+  });
+
+  return router;
 }

@@ -2,9 +2,12 @@ import type { Router } from 'express';
 import type { AppContext } from '../app';
 import { atlasRouter } from './atlas.router';
 import { authRouter } from './auth.router';
+import { devMailRouter } from './dev-mail.router';
 import { graphsRouter } from './graphs.router';
 import { keysRouter } from './keys.router';
 import { openapiRouter } from './openapi.router';
+import { quickRouter } from './quick.router';
+import { runPlanRouter } from './run-plan.router';
 import { runsRouter } from './runs.router';
 import { sharedRouter } from './shared.router';
 import { sweepsRouter } from './sweeps.router';
@@ -20,9 +23,12 @@ export function v1Routers(ctx: AppContext): Router[] {
     keysRouter(ctx),
     graphsRouter(ctx),
     verifyRouter(ctx),
+    runPlanRouter(ctx),
     runsRouter(ctx),
     sweepsRouter(ctx),
     atlasRouter(ctx),
     sharedRouter(ctx),
+    quickRouter(ctx),
+    devMailRouter(ctx),
   ];
 }

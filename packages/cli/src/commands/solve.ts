@@ -1,9 +1,9 @@
 import { writeFileSync } from 'node:fs';
 import type { Command } from 'commander';
+import { rankingSvg, rankingTikz } from '@cairn/engine';
 import { EnginePool } from '@cairn/engine/pool';
 import { CliError, EXIT } from '../cli-error';
 import { loadGraph, reportWarnings } from '../load-graph';
-import { rankingSvg, rankingTikz } from '../drawing';
 import { labelPicture } from '../picture';
 import { progressLine } from '../progress';
 

@@ -2,7 +2,8 @@ import { availableParallelism } from 'node:os';
 import { MessageChannel } from 'node:worker_threads';
 import { Piscina } from 'piscina';
 import { EngineError } from '../errors';
-import type { EngineTask, EngineTaskResult, ExactProgress, WorkerMessage } from './task';
+import { fromTransferred } from './engine-error-transfer';
+import type { EngineTask, EngineTaskResult, ExactProgress, WorkerMessage, WorkerReply } from './task';
 
 export interface EnginePoolOptions {
   /** Worker threads; the machine's core count by default. */
@@ -67,8 +68,9 @@ export class EnginePool {
     const overdue =
       task.kind === 'solve' && task.timeLimitMs !== undefined ? setTimeout(softStop, task.timeLimitMs + this.graceMs) : undefined;
     const message: WorkerMessage = { task, port: port2, stop };
+    let reply: WorkerReply;
     try {
-      return (await this.piscina.run(message, { transferList: [port2], signal: hardStop.signal })) as EngineTaskResult;
+      reply = (await this.piscina.run(message, { transferList: [port2], signal: hardStop.signal })) as WorkerReply;
     } catch (err) {
       throw describeFailure(err, hardStop.signal.aborted, this.memoryLimitMb);
     } finally {
@@ -77,6 +79,8 @@ export class EnginePool {
       options.signal?.removeEventListener('abort', softStop);
       port1.close();
     }
+    if (reply.kind === 'error') throw fromTransferred(reply.error);
+    return reply;
   }
 
   /** Ends every worker; tasks still running fail. */

@@ -17,6 +17,9 @@ export type EngineTask =
 
 export type EngineTaskResult = { kind: 'solve'; solution: Solution } | { kind: 'verify'; verdict: RankingVerdict };
 
+/** What a worker answers: a result, or an engine error in a form that survives the thread boundary. */
+export type WorkerReply = EngineTaskResult | { kind: 'error'; error: import('./engine-error-transfer').TransferredEngineError };
+
 /** What the worker receives: the task, a port for progress, and the shared stop flag. */
 export interface WorkerMessage {
   task: EngineTask;

@@ -2,13 +2,23 @@ import { EngineError } from '../errors';
 import { verifyRanking } from '../ranking/verify';
 import { solve } from '../solve/solve';
 import { graphFromSpec } from '../spec/graph-from-spec';
-import type { EngineTaskResult, WorkerMessage } from './task';
+import { toTransferred } from './engine-error-transfer';
+import type { EngineTaskResult, WorkerMessage, WorkerReply } from './task';
 
 /**
  * The pool's worker: builds the graph from its spec and runs the task. The search is synchronous, so
  * cancellation arrives through the shared stop flag (checked inside the search), not through messages.
  */
-export default function runTask({ task, port, stop }: WorkerMessage): EngineTaskResult {
+export default function runTask(message: WorkerMessage): WorkerReply {
+  try {
+    return runEngineTask(message);
+  } catch (err) {
+    if (err instanceof EngineError) return { kind: 'error', error: toTransferred(err) };
+    throw err;
+  }
+}
+
+function runEngineTask({ task, port, stop }: WorkerMessage): EngineTaskResult {
   const files = task.files ?? {};
   const graph = graphFromSpec(task.spec, (path) => {
     const content = files[path];

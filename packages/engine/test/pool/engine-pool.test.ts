@@ -1,5 +1,5 @@
 import { afterAll, describe, expect, it } from 'vitest';
-import { gridGraph, verifyRanking } from '../../src/index';
+import { EngineError, gridGraph, ParseError, SpecError, verifyRanking } from '../../src/index';
 import { bruteForceTreeDepth } from '../brute-force-td';
 import { EnginePool } from '../../src/pool/index';
 
@@ -44,6 +44,18 @@ describe('EnginePool (real worker threads)', () => {
     await expect(pool.run({ kind: 'solve', spec: 'mask:gone.mask' })).rejects.toThrow(/not sent with it/);
     const after = await pool.run({ kind: 'solve', spec: 'path:9' });
     expect(after.kind === 'solve' && after.solution.rankNumber).toBe(4);
+  });
+
+  it("keeps an engine error's class, code and position across the thread boundary", async () => {
+    const spec = await pool.run({ kind: 'solve', spec: 'grdi:4x4' }).catch((e: unknown) => e);
+    expect(spec).toBeInstanceOf(SpecError);
+    expect((spec as EngineError).code).toBe('spec_error');
+    const parse = await pool.run({ kind: 'solve', spec: 'g.dimacs', files: { 'g.dimacs': 'p edge 3 1\ne 1 x\n' } }).catch((e: unknown) => e);
+    expect(parse).toBeInstanceOf(ParseError);
+    expect(parse).toMatchObject({ code: 'parse_error', line: 2, column: 5 });
+    const formula = await pool.run({ kind: 'solve', spec: 'grid:5x5', method: 'formula' }).catch((e: unknown) => e);
+    expect(formula).toBeInstanceOf(EngineError);
+    expect((formula as EngineError).code).not.toBe('worker_failed');
   });
 
   it('fails a task that runs out of its memory limit, and the pool carries on', async () => {

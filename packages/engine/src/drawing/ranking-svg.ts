@@ -1,4 +1,5 @@
-import type { Graph } from '@cairn/engine';
+import type { Graph } from '../graph/graph';
+import { vertexPositions } from './vertex-positions';
 
 /** Cairn's sequential scale for labels, from pale lichen (low) to deep slate (high), in RGB. */
 const LOW = [233, 238, 226];
@@ -13,23 +14,21 @@ function shade(label: number, top: number): string {
 /** Text on a cell: dark on light cells, light on dark ones. */
 const ink = (label: number, top: number) => (top > 1 && (label - 1) / (top - 1) > 0.55 ? '#f6f3ec' : '#1f2d2b');
 
-/** The vertices as nodes: grid-like graphs at their cells, others on a circle (no layout engine needed). */
-function positions(g: Graph): { x: number; y: number }[] {
-  const layout = g.layout;
-  if (layout) return Array.from(layout.cells, (cell) => ({ x: cell % layout.cols, y: Math.floor(cell / layout.cols) }));
-  const n = g.vertexCount;
-  const r = Math.max(2, n / 6);
-  return Array.from({ length: n }, (_, v) => ({ x: r + r * Math.cos((2 * Math.PI * v) / n), y: r + r * Math.sin((2 * Math.PI * v) / n) }));
-}
-
 /** The ranking as an SVG picture: labelled cells for grid-like graphs, a node-link drawing otherwise. */
 export function rankingSvg(g: Graph, labels: ArrayLike<number>): string {
-  const top = Math.max(1, ...Array.from(labels));
-  const at = positions(g);
+  let top = 1;
+  for (let v = 0; v < labels.length; v++) top = Math.max(top, labels[v]!);
+  const at = vertexPositions(g);
   const size = 36;
   const pad = 4;
-  const width = (Math.max(0, ...at.map((p) => p.x)) + 1) * size + 2 * pad;
-  const height = (Math.max(0, ...at.map((p) => p.y)) + 1) * size + 2 * pad;
+  let maxX = 0;
+  let maxY = 0;
+  for (const p of at) {
+    maxX = Math.max(maxX, p.x);
+    maxY = Math.max(maxY, p.y);
+  }
+  const width = (maxX + 1) * size + 2 * pad;
+  const height = (maxY + 1) * size + 2 * pad;
   const parts: string[] = [];
   if (!g.layout) {
     for (const [u, v] of g.edges()) {
@@ -51,17 +50,4 @@ export function rankingSvg(g: Graph, labels: ArrayLike<number>): string {
     );
   }
   return `<svg xmlns="http://www.w3.org/2000/svg" width="${width.toFixed(0)}" height="${height.toFixed(0)}" viewBox="0 0 ${width.toFixed(1)} ${height.toFixed(1)}">\n${parts.join('\n')}\n</svg>\n`;
-}
-
-/** The ranking as a TikZ picture for a paper: one labelled node per vertex, edges for non-grid graphs. */
-export function rankingTikz(g: Graph, labels: ArrayLike<number>): string {
-  const at = positions(g);
-  const lines = ['% A ranking drawn by Cairn; needs \\usepackage{tikz}.', '\\begin{tikzpicture}[x=0.8cm,y=-0.8cm,every node/.style={draw,minimum size=0.7cm,inner sep=0pt}]'];
-  if (!g.layout) for (const [u, v] of g.edges()) lines.push(`  \\draw (${at[u]!.x.toFixed(2)},${at[u]!.y.toFixed(2)}) -- (${at[v]!.x.toFixed(2)},${at[v]!.y.toFixed(2)});`);
-  for (let v = 0; v < g.vertexCount; v++) {
-    const shape = g.layout ? 'rectangle' : 'circle,fill=white';
-    lines.push(`  \\node[${shape}] at (${at[v]!.x.toFixed(2)},${at[v]!.y.toFixed(2)}) {${labels[v]}};`);
-  }
-  lines.push('\\end{tikzpicture}');
-  return `${lines.join('\n')}\n`;
 }

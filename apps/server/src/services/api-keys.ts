@@ -1,0 +1,126 @@
+import { createHash, randomBytes } from 'node:crypto';
+import type { ApiKeyInfo, ApiScope } from '@cairn/schema';
+import { IsNull, type DataSource } from 'typeorm';
+import { ApiKey } from '../entities/api-key.entity';
+import { User } from '../entities/user.entity';
+import { UnknownMemberError } from './members';
+
+/** Every secret starts so; a reader (or a secret scanner) recognises a Cairn key by it. */
+export const KEY_SECRET_PREFIX = 'cairn_';
+/** How much of the secret is kept in the clear to recognise a key in a list. */
+export const KEY_PREFIX_LENGTH = 12;
+
+/** SHA-256 (hex) of the whole secret: the only form in which a key is stored. */
+export function hashKeySecret(secret: string): string {
+  return createHash('sha256').update(secret).digest('hex');
+}
+
+/** `cairn_` and 43 base64url characters (256 random bits). */
+function newSecret(): string {
+  return KEY_SECRET_PREFIX + randomBytes(32).toString('base64url');
+}
+
+/** A key as the API shows it: never the secret or its hash. */
+export function apiKeyView(key: ApiKey, owner: Pick<User, 'id' | 'login'>): ApiKeyInfo {
+  return {
+    id: key.id,
+    name: key.name,
+    prefix: key.prefix,
+    scopes: key.scopes,
+    owner: { id: owner.id, login: owner.login },
+    createdAt: key.createdAt.toISOString(),
+    lastUsedAt: key.lastUsedAt ? key.lastUsedAt.toISOString() : null,
+    revokedAt: key.revokedAt ? key.revokedAt.toISOString() : null,
+  };
+}
+
+export interface NewApiKey {
+  userId: string;
+  name: string;
+  scopes: ApiScope[];
+  /** The admin who made it; null (or absent) for keys made by the demo loader or other tooling. */
+  createdBy?: string | null;
+}
+
+const isUniqueViolation = (err: unknown, constraintPart: string) =>
+  typeof err === 'object' && err !== null && (err as { code?: string }).code === '23505' && String((err as { constraint?: string }).constraint ?? '').includes(constraintPart);
+
+/**
+ * Makes a key for a member and returns it with its secret, which exists nowhere else afterwards.
+ * Throws UnknownMemberError when the member does not exist.
+ */
+export async function createApiKey(source: DataSource, input: NewApiKey): Promise<{ key: ApiKeyInfo; secret: string }> {
+  // Two secrets share their first 12 characters about once in 7·10^10 pairs; the prefix is unique, so try again.
+  for (let attempt = 0; ; attempt++) {
+    const secret = newSecret();
+    try {
+      return await source.transaction(async (tx) => {
+        const owner = await tx.getRepository(User).findOne({ where: { id: input.userId }, lock: { mode: 'pessimistic_read' } });
+        if (!owner) throw new UnknownMemberError(input.userId);
+        const repo = tx.getRepository(ApiKey);
+        const saved = await repo.save(
+          repo.create({
+            userId: owner.id,
+            name: input.name,
+            scopes: [...input.scopes],
+            prefix: secret.slice(0, KEY_PREFIX_LENGTH),
+            secretHash: hashKeySecret(secret),
+            createdBy: input.createdBy ?? null,
+            lastUsedAt: null,
+            revokedAt: null,
+          }),
+        );
+        return { key: apiKeyView(saved, owner), secret };
+      });
+    } catch (err) {
+      if (attempt < 3 && isUniqueViolation(err, 'prefix')) continue;
+      throw err;
+    }
+  }
+}
+
+/** Every key (optionally one member's), newest first, with its owner. */
+export async function listApiKeys(source: DataSource, filter: { userId?: string | undefined } = {}): Promise<ApiKeyInfo[]> {
+  const keys = await source.getRepository(ApiKey).find({
+    where: filter.userId ? { userId: filter.userId } : {},
+    order: { createdAt: 'DESC', id: 'ASC' },
+  });
+  if (keys.length === 0) return [];
+  const ownerIds = [...new Set(keys.map((k) => k.userId))];
+  const owners = await source.getRepository(User).createQueryBuilder('u').where('u.id IN (:...ids)', { ids: ownerIds }).getMany();
+  const byId = new Map(owners.map((u) => [u.id, u]));
+  return keys.flatMap((k) => {
+    const owner = byId.get(k.userId);
+    return owner ? [apiKeyView(k, owner)] : [];
+  });
+}
+
+/**
+ * Revokes a key (from the next request on). Revoking a revoked key changes nothing and is no error;
+ * false when no key has that id.
+ */
+export async function revokeApiKey(source: DataSource, id: string): Promise<boolean> {
+  const repo = source.getRepository(ApiKey);
+  await repo.update({ id, revokedAt: IsNull() }, { revokedAt: () => 'now()' });
+  return repo.existsBy({ id });
+}
+
+/**
+ * The live key with this secret and its owner, marked as used now; undefined for an unknown or revoked
+ * secret. Looked up on every request, so a revocation takes effect at once.
+ */
+export async function useApiKey(source: DataSource, secret: string): Promise<{ key: ApiKey; user: User } | undefined> {
+  const keys = source.getRepository(ApiKey);
+  const key = await keys.findOneBy({ secretHash: hashKeySecret(secret), revokedAt: IsNull() });
+  if (!key) return undefined;
+  const user = await source.getRepository(User).findOneBy({ id: key.userId });
+  if (!user) return undefined;
+  const [rows] = (await source.query(`UPDATE api_keys SET last_used_at = now() WHERE id = $1 AND revoked_at IS NULL RETURNING last_used_at`, [key.id])) as [
+    { last_used_at: Date }[],
+    number,
+  ];
+  const used = rows[0];
+  if (!used) return undefined; // revoked between the two statements
+  key.lastUsedAt = used.last_used_at;
+  return { key, user };
+}

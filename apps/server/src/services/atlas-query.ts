@@ -1,0 +1,93 @@
+import { EngineError, parseGraphSpec } from '@cairn/engine';
+import type { AtlasEntryView, AtlasList, AtlasQuery } from '@cairn/schema';
+import type { DataSource } from 'typeorm';
+import { HttpError } from '../http/errors';
+import { graphKeyOf } from './graph-key';
+import { queryRows } from './run-row';
+
+interface AtlasRow {
+  graph_key: string;
+  family: string;
+  sizes: Record<string, number>;
+  vertex_count: number;
+  edge_count: number;
+  lower: number;
+  upper: number;
+  exact: boolean;
+  lower_provenance: Record<string, unknown>;
+  upper_provenance: Record<string, unknown>;
+  lower_run_id: string | null;
+  upper_run_id: string | null;
+  updated_at: Date;
+}
+
+function toView(r: AtlasRow): AtlasEntryView {
+  return {
+    graphKey: r.graph_key,
+    family: r.family,
+    sizes: r.sizes,
+    vertexCount: r.vertex_count,
+    edgeCount: r.edge_count,
+    lower: r.lower,
+    upper: r.upper,
+    exact: r.exact,
+    rankNumber: r.exact ? r.lower : null,
+    lowerProvenance: r.lower_provenance,
+    upperProvenance: r.upper_provenance,
+    lowerRunId: r.lower_run_id,
+    upperRunId: r.upper_run_id,
+    updatedAt: new Date(r.updated_at).toISOString(),
+  };
+}
+
+/** Families whose key puts the smaller size first (a grid and its transpose are one entry). */
+const TRANSPOSABLE = new Set(['grid', 'torus']);
+
+/** GET /api/v1/atlas: filtered by family, sizes (exact or ranges) and exactness; ordered by family and size. */
+export async function listAtlas(source: DataSource, q: AtlasQuery): Promise<AtlasList> {
+  const where: string[] = [];
+  const params: unknown[] = [];
+  const param = (v: unknown) => {
+    params.push(v);
+    return `$${params.length}`;
+  };
+  let { rows, cols } = q;
+  if (rows !== undefined && cols !== undefined && rows > cols && (q.family === undefined || TRANSPOSABLE.has(q.family))) [rows, cols] = [cols, rows];
+  const size = (name: 'rows' | 'cols') => `(sizes->>'${name}')::int`;
+  if (q.family) where.push(`family = ${param(q.family)}`);
+  if (rows !== undefined) where.push(`${size('rows')} = ${param(rows)}`);
+  if (cols !== undefined) where.push(`${size('cols')} = ${param(cols)}`);
+  if (q.rowsFrom !== undefined) where.push(`${size('rows')} >= ${param(q.rowsFrom)}`);
+  if (q.rowsTo !== undefined) where.push(`${size('rows')} <= ${param(q.rowsTo)}`);
+  if (q.colsFrom !== undefined) where.push(`${size('cols')} >= ${param(q.colsFrom)}`);
+  if (q.colsTo !== undefined) where.push(`${size('cols')} <= ${param(q.colsTo)}`);
+  if (q.exact !== undefined) where.push(`exact = ${param(q.exact)}`);
+  const filter = where.length ? `WHERE ${where.join(' AND ')}` : '';
+  const [{ total }] = (await queryRows<{ total: number }>(source, `SELECT count(*)::int AS total FROM atlas_entries ${filter}`, params)) as [{ total: number }];
+  const rowsFound = await queryRows<AtlasRow>(
+    source,
+    `SELECT * FROM atlas_entries ${filter}
+     ORDER BY family, ${size('rows')} NULLS LAST, ${size('cols')} NULLS LAST, vertex_count, graph_key
+     LIMIT ${param(q.limit)} OFFSET ${param(q.offset)}`,
+    params,
+  );
+  const next = q.offset + rowsFound.length;
+  return { entries: rowsFound.map(toView), total, nextOffset: next < total ? next : null };
+}
+
+/**
+ * GET /api/v1/atlas/:key: by the atlas key, or by any text spec of the same graph (grid:9x4 finds the
+ * entry grid:4x9).
+ */
+export async function findAtlasEntry(source: DataSource, key: string): Promise<AtlasEntryView> {
+  const keys = [key];
+  try {
+    const spec = parseGraphSpec(key);
+    if (spec.family !== 'file' && !((spec.family === 'mask' || spec.family === 'tree') && spec.file !== undefined)) keys.push(graphKeyOf(spec).key);
+  } catch (err) {
+    if (!(err instanceof EngineError)) throw err;
+  }
+  const [row] = await queryRows<AtlasRow>(source, `SELECT * FROM atlas_entries WHERE graph_key = ANY($1) LIMIT 1`, [keys]);
+  if (!row) throw new HttpError(404, 'not_found', `the atlas has no entry for ${key}`);
+  return toView(row);
+}

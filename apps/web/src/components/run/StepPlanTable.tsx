@@ -1,0 +1,102 @@
+import type { RunPlan } from '@cairn/schema';
+import { createColumnHelper, flexRender, getCoreRowModel, getPaginationRowModel, useReactTable } from '@tanstack/react-table';
+import { useMemo } from 'react';
+import { quietButtonClass } from './bits';
+
+type Step = RunPlan['steps'][number];
+
+/** How many vertices of a step are listed before "…". */
+export const STEP_VERTICES_SHOWN = 12;
+
+/** The step plan read from labels alone (step s handles every vertex labelled s), when the plan route is not at hand. */
+export function stepsFromLabels(labels: readonly number[]): Step[] {
+  const byLabel = new Map<number, number[]>();
+  labels.forEach((l, v) => {
+    const list = byLabel.get(l);
+    if (list) list.push(v);
+    else byLabel.set(l, [v]);
+  });
+  return [...byLabel.entries()].sort((a, b) => a[0] - b[0]).map(([step, vertices]) => ({ step, vertices, count: vertices.length }));
+}
+
+const column = createColumnHelper<Step>();
+
+/**
+ * The step plan as a table, a page of steps at a time: step s handles its vertices in parallel, and
+ * step s + 1 may start once step s is done. `nameOf` writes a vertex the way the page draws it.
+ */
+export function StepPlanTable({ steps, nameOf = String, pageSize = 20 }: { steps: Step[]; nameOf?: (v: number) => string; pageSize?: number }) {
+  const columns = useMemo(
+    () => [
+      column.accessor('step', { header: 'Step', cell: (c) => <span className="font-mono">{c.getValue()}</span> }),
+      column.accessor('count', { header: 'Count', cell: (c) => c.getValue().toLocaleString('en') }),
+      column.accessor('vertices', {
+        header: 'Vertices',
+        cell: (c) => {
+          const vs = c.getValue();
+          const shown = vs.slice(0, STEP_VERTICES_SHOWN).map(nameOf).join(', ');
+          return (
+            <span className="font-mono text-xs">
+              {shown}
+              {vs.length > STEP_VERTICES_SHOWN ? ', …' : ''}
+            </span>
+          );
+        },
+      }),
+    ],
+    [nameOf],
+  );
+  const table = useReactTable({
+    data: steps,
+    columns,
+    getCoreRowModel: getCoreRowModel(),
+    getPaginationRowModel: getPaginationRowModel(),
+    initialState: { pagination: { pageIndex: 0, pageSize } },
+  });
+  if (steps.length === 0) return <p className="text-sm text-lichen-700">The plan has no steps.</p>;
+  const { pageIndex } = table.getState().pagination;
+  return (
+    <div className="space-y-2">
+      <div className="overflow-x-auto">
+        <table className="min-w-full text-left text-sm" data-testid="step-plan">
+          <caption className="sr-only">Step plan: the vertices each step handles in parallel</caption>
+          <thead className="border-b border-stone-200 text-xs uppercase tracking-wide text-lichen-700">
+            {table.getHeaderGroups().map((hg) => (
+              <tr key={hg.id}>
+                {hg.headers.map((h) => (
+                  <th key={h.id} scope="col" className="px-2 py-1.5 font-medium">
+                    {flexRender(h.column.columnDef.header, h.getContext())}
+                  </th>
+                ))}
+              </tr>
+            ))}
+          </thead>
+          <tbody className="divide-y divide-stone-100">
+            {table.getRowModel().rows.map((row) => (
+              <tr key={row.id}>
+                {row.getVisibleCells().map((cell) => (
+                  <td key={cell.id} className="px-2 py-1.5 align-top">
+                    {flexRender(cell.column.columnDef.cell, cell.getContext())}
+                  </td>
+                ))}
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      </div>
+      {table.getPageCount() > 1 && (
+        <nav className="flex items-center gap-2 text-sm" aria-label="Step plan pages">
+          <button type="button" className={quietButtonClass} onClick={() => table.previousPage()} disabled={!table.getCanPreviousPage()}>
+            Previous steps
+          </button>
+          <span>
+            page {pageIndex + 1} of {table.getPageCount()}
+          </span>
+          <button type="button" className={quietButtonClass} onClick={() => table.nextPage()} disabled={!table.getCanNextPage()}>
+            Next steps
+          </button>
+        </nav>
+      )}
+    </div>
+  );
+}
