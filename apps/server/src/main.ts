@@ -2,6 +2,7 @@ import { loadConfig } from './config';
 import { exitWithError } from './cli-errors';
 import { createLogger } from './logger';
 import { startServer } from './server';
+import { stopOnSignals } from './stop-on-signals';
 
 try {
   const config = loadConfig();
@@ -12,18 +13,7 @@ try {
     process.stdout.write(`  local sign-in provider and mailbox: ${running.dev.url} (mail: ${running.dev.url}/mail)\n`);
     process.stdout.write(`  local mail catcher (SMTP): ${config.host}:${running.dev.smtpPort}\n`);
   }
-  let stopping = false;
-  const stop = (signal: string) => {
-    if (stopping) return;
-    stopping = true;
-    logger.info({ signal }, 'shutting down');
-    running.close().then(
-      () => process.exit(0),
-      (err: unknown) => exitWithError('shutdown', err),
-    );
-  };
-  process.on('SIGINT', () => stop('SIGINT'));
-  process.on('SIGTERM', () => stop('SIGTERM'));
+  stopOnSignals(logger, 'server', () => running.close());
 } catch (err) {
   exitWithError('start', err);
 }

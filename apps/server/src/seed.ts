@@ -9,7 +9,8 @@ import { createMailer } from './mail/mailer';
 
 try {
   const config = loadConfig();
-  const logger = createLogger(config.logLevel);
+  // Quiet unless something is wrong: the start command prints its own summary below.
+  const logger = createLogger(config.logLevel === 'info' ? 'warn' : config.logLevel);
   const db = new Database(createDataSource(config.databaseUrl), logger);
   const source = await db.connect();
   const loaded = await loadDemoData(source);

@@ -6,6 +6,7 @@ import { Database } from './db/database';
 import { startJobs } from './jobs/jobs';
 import { createLogger } from './logger';
 import { createMailer } from './mail/mailer';
+import { stopOnSignals } from './stop-on-signals';
 
 /**
  * `node dist/worker.js`: only the run workers, no HTTP. Same configuration and database as the server
@@ -25,24 +26,11 @@ try {
     () => process.stdout.write(`Cairn run workers are taking jobs (${jobs.concurrency} at once, worker ${jobs.worker})\n`),
     () => {},
   );
-  let stopping = false;
-  const stop = (signal: string) => {
-    if (stopping) return;
-    stopping = true;
-    logger.info({ signal }, 'run workers shutting down');
-    jobs
-      .close()
-      .then(async () => {
-        mailer.close();
-        await db.close();
-      })
-      .then(
-        () => process.exit(0),
-        (err: unknown) => exitWithError('shutdown', err),
-      );
-  };
-  process.on('SIGINT', () => stop('SIGINT'));
-  process.on('SIGTERM', () => stop('SIGTERM'));
+  stopOnSignals(logger, 'run workers', async () => {
+    await jobs.close();
+    mailer.close();
+    await db.close();
+  });
 } catch (err) {
   exitWithError('start', err);
 }

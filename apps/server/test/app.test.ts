@@ -1,22 +1,19 @@
-import { createServer, type Server } from 'node:http';
-import type { AddressInfo } from 'node:net';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { createApp, createDataSource, createLogger, Database } from '../src/index';
+import { createApp, createLogger } from '../src/index';
+import { serveApp, type ServedApp } from './support/listen';
 import { testContext } from './support/test-context';
+import { unreachableDatabase } from './support/test-database';
 
-// A database URL on a port where nothing listens (port 9, discard, is closed on loopback here).
-const unreachable = 'postgres://cairn@127.0.0.1:9/cairn_unit';
-let server: Server;
+let served: ServedApp;
 let base: string;
 const logger = createLogger('silent');
-const db = new Database(createDataSource(unreachable), logger);
+const db = unreachableDatabase(logger);
 
 beforeAll(async () => {
-  server = createServer(createApp(testContext(db, { logger })));
-  await new Promise<void>((r) => server.listen(0, '127.0.0.1', r));
-  base = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
+  served = await serveApp(createApp(testContext(db, { logger })));
+  base = served.url;
 });
-afterAll(() => new Promise<void>((r) => server.close(() => r())));
+afterAll(() => served?.close());
 
 describe('API without a database', () => {
   it('answers health with 503 and the reason', async () => {

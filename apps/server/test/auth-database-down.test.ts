@@ -1,35 +1,25 @@
 import { createHmac } from 'node:crypto';
-import { createServer, type Server } from 'node:http';
-import type { AddressInfo } from 'node:net';
-import type { Express } from 'express';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { closeAuth } from '../src/auth/install-auth';
-import { createApp, createDataSource, createLogger, Database } from '../src/index';
+import { createApp } from '../src/index';
+import { serveApp, type ServedApp } from './support/listen';
 import { testContext } from './support/test-context';
+import { UNREACHABLE_DATABASE_URL, unreachableDatabase } from './support/test-database';
 
-// A database URL on a port where nothing listens (port 9, discard, is closed on loopback here).
-const unreachable = 'postgres://cairn@127.0.0.1:9/cairn_unit';
-let server: Server;
-let app: Express;
+let served: ServedApp;
 let base: string;
 let cookie: string;
 
 beforeAll(async () => {
-  const ctx = testContext(new Database(createDataSource(unreachable), createLogger('silent')), {}, { CAIRN_DATABASE_URL: unreachable });
-  app = createApp(ctx);
-  server = createServer(app);
-  await new Promise<void>((r) => server.listen(0, '127.0.0.1', r));
-  base = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
+  const ctx = testContext(unreachableDatabase(), {}, { CAIRN_DATABASE_URL: UNREACHABLE_DATABASE_URL });
+  served = await serveApp(createApp(ctx));
+  base = served.url;
   // A correctly signed session cookie (express-session signs `s:<sid>` with HMAC-SHA256, base64 without
   // padding), so the app has to ask its store about it.
   const sid = 'a-session-the-store-cannot-be-asked-about';
   const signature = createHmac('sha256', ctx.config.sessionSecret).update(sid).digest('base64').replace(/=+$/, '');
   cookie = `cairn.sid=${encodeURIComponent(`s:${sid}.${signature}`)}`;
 });
-afterAll(async () => {
-  await new Promise<void>((r) => server.close(() => r()));
-  await closeAuth(app);
-});
+afterAll(() => served?.close());
 
 describe('authentication while the database is away', () => {
   it('answers a session request with 503 database_unavailable, not a 500', async () => {

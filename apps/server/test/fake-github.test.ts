@@ -1,18 +1,16 @@
-import { createServer, type Server } from 'node:http';
-import type { AddressInfo } from 'node:net';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { demoIdentities, LOCAL_CLIENT_ID, LOCAL_CLIENT_SECRET } from '../src/index';
 import { createFakeGithub } from '../src/dev/fake-github';
+import { listenOnLoopback, type Listening } from './support/listen';
 
-let server: Server;
+let server: Listening;
 let base: string;
 
 beforeAll(async () => {
-  server = createServer(createFakeGithub({ identities: demoIdentities, clientId: LOCAL_CLIENT_ID, clientSecret: LOCAL_CLIENT_SECRET }));
-  await new Promise<void>((r) => server.listen(0, '127.0.0.1', r));
-  base = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
+  server = await listenOnLoopback(createFakeGithub({ identities: demoIdentities, clientId: LOCAL_CLIENT_ID, clientSecret: LOCAL_CLIENT_SECRET }));
+  base = server.url;
 });
-afterAll(() => new Promise<void>((r) => server.close(() => r())));
+afterAll(() => server?.close());
 
 const callback = 'http://127.0.0.1:9/auth/github/callback';
 

@@ -1,11 +1,10 @@
-import { createServer, type Server } from 'node:http';
-import type { AddressInfo } from 'node:net';
 import express from 'express';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { actorOf, requirePermission } from '../src/auth/require';
-import { closeAuth, installAuth } from '../src/auth/install-auth';
+import { installAuth } from '../src/auth/install-auth';
 import { errorHandler } from '../src/http/errors';
 import { createLogger } from '../src/logger';
+import { serveApp, type ServedApp } from './support/listen';
 import { createTestDatabase, type TestDatabase } from './support/test-database';
 import { testContext } from './support/test-context';
 import { insertMemberWithKey } from './support/test-key';
@@ -13,13 +12,12 @@ import { insertMemberWithKey } from './support/test-key';
 // An app with only the authentication layer and two probe routes, so the key handling is tested apart
 // from every other router: one route says who the caller is, one needs runs:write.
 let tdb: TestDatabase;
-let server: Server;
-let app: express.Express;
+let served: ServedApp;
 let base: string;
 
 beforeAll(async () => {
   tdb = await createTestDatabase('keys_bearer');
-  app = express();
+  const app = express();
   app.use(express.json());
   installAuth(app, testContext(tdb.db));
   app.get('/api/probe/who', (req, res) => {
@@ -30,14 +28,12 @@ beforeAll(async () => {
     res.status(201).json({ ok: true });
   });
   app.use(errorHandler(createLogger('silent')));
-  server = createServer(app);
-  await new Promise<void>((r) => server.listen(0, '127.0.0.1', r));
-  base = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
+  served = await serveApp(app);
+  base = served.url;
 });
 
 afterAll(async () => {
-  await new Promise<void>((r) => server.close(() => r()));
-  await closeAuth(app);
+  await served.close();
   await tdb.drop();
 });
 

@@ -1,10 +1,7 @@
-import { createServer, type Server } from 'node:http';
-import type { AddressInfo } from 'node:net';
 import { compileErrors, validate } from '@readme/openapi-parser';
-import type express from 'express';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { closeAuth } from '../src/auth/install-auth';
 import { createApp } from '../src/index';
+import { serveApp, type ServedApp } from './support/listen';
 import { createTestDatabase, type TestDatabase } from './support/test-database';
 import { testContext } from './support/test-context';
 import { insertMemberWithKey } from './support/test-key';
@@ -13,8 +10,7 @@ import { insertMemberWithKey } from './support/test-key';
 type Json = Record<string, any>; // eslint-disable-line @typescript-eslint/no-explicit-any
 
 let tdb: TestDatabase;
-let app: express.Express;
-let server: Server;
+let served: ServedApp;
 let base: string;
 let adminKey: string;
 let doc: Json;
@@ -24,10 +20,8 @@ const METHODS = ['get', 'post', 'put', 'patch', 'delete'] as const;
 beforeAll(async () => {
   tdb = await createTestDatabase('openapi_document');
   adminKey = (await insertMemberWithKey(await tdb.db.connect(), 'admin-openapi', 'admin')).authorization;
-  app = createApp(testContext(tdb.db));
-  server = createServer(app);
-  await new Promise<void>((r) => server.listen(0, '127.0.0.1', r));
-  base = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
+  served = await serveApp(createApp(testContext(tdb.db)));
+  base = served.url;
   const res = await fetch(`${base}/api/v1/openapi.json`);
   expect(res.status).toBe(200);
   expect(res.headers.get('content-type')).toMatch(/^application\/json/);
@@ -35,8 +29,7 @@ beforeAll(async () => {
 });
 
 afterAll(async () => {
-  await new Promise<void>((r) => server?.close(() => r()));
-  if (app) await closeAuth(app);
+  await served?.close();
   await tdb?.drop();
 });
 

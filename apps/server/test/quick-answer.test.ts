@@ -1,23 +1,21 @@
-import { createServer, type Server } from 'node:http';
-import type { AddressInfo } from 'node:net';
 import { QuickAnswer } from '@cairn/schema';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createApp } from '../src/index';
+import { serveApp, type ServedApp } from './support/listen';
 import { testContext } from './support/test-context';
 import { createTestDatabase, type TestDatabase } from './support/test-database';
 
 let t: TestDatabase;
-let server: Server;
+let served: ServedApp;
 let base: string;
 
 beforeAll(async () => {
   t = await createTestDatabase('quick');
-  server = createServer(createApp(testContext(t.db)));
-  await new Promise<void>((r) => server.listen(0, '127.0.0.1', r));
-  base = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
+  served = await serveApp(createApp(testContext(t.db)));
+  base = served.url;
 });
 afterAll(async () => {
-  await new Promise<void>((r) => server.close(() => r()));
+  await served.close();
   await t.drop();
 });
 

@@ -1,15 +1,14 @@
-import { createServer, type Server } from 'node:http';
-import type { AddressInfo } from 'node:net';
 import { bestUpperBound, gridGraph } from '@cairn/engine';
 import { RunPlan } from '@cairn/schema';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createApp } from '../src/index';
+import { serveApp, type ServedApp } from './support/listen';
 import { testContext } from './support/test-context';
 import { createTestDatabase, type TestDatabase } from './support/test-database';
 import { insertMemberWithKey } from './support/test-key';
 
 let t: TestDatabase;
-let server: Server;
+let served: ServedApp;
 let base: string;
 let owner: { userId: string; authorization: string };
 let stranger: { authorization: string };
@@ -29,12 +28,11 @@ beforeAll(async () => {
     [owner.userId, JSON.stringify({ family: 'grid', rows, cols }), JSON.stringify(labels), Math.max(...labels)],
   )) as { id: string }[];
   runId = run!.id;
-  server = createServer(createApp(testContext(t.db)));
-  await new Promise<void>((r) => server.listen(0, '127.0.0.1', r));
-  base = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
+  served = await serveApp(createApp(testContext(t.db)));
+  base = served.url;
 });
 afterAll(async () => {
-  await new Promise<void>((r) => server.close(() => r()));
+  await served.close();
   await t.drop();
 });
 

@@ -1,14 +1,11 @@
-import { createServer, type Server } from 'node:http';
-import type { AddressInfo } from 'node:net';
 import type { RunView } from '@cairn/schema';
-import type express from 'express';
 import type { DataSource } from 'typeorm';
-import { closeAuth } from '../src/auth/install-auth';
 import { createApp, type AppContext } from '../src/index';
 import { startJobs, type RunJobs } from '../src/jobs/jobs';
 import type { QueueSettings } from '../src/jobs/queue-settings';
 import { createLogger } from '../src/logger';
 import type { Mailer } from '../src/mail/mailer';
+import { serveApp } from './support/listen';
 import { createTestDatabase, type TestDatabase } from './support/test-database';
 import { recordingMailer, testContext } from './support/test-context';
 
@@ -37,14 +34,12 @@ export async function startRunsHarness(label: string, options: { workers?: boole
   const base = testContext(tdb.db, { mailer: options.mailer ?? recordingMailer(), logger: createLogger(process.env.CAIRN_TEST_LOG ?? 'silent') }, { CAIRN_RUN_CONCURRENCY: '1', CAIRN_ENGINE_THREADS: '1', ...options.env });
   let jobs: RunJobs | undefined;
   const ctx: AppContext = { ...base, jobs: { close: async () => jobs?.close() } };
-  const app: express.Express = createApp(ctx);
-  const server: Server = createServer(app);
-  await new Promise<void>((r) => server.listen(0, '127.0.0.1', r));
+  const served = await serveApp(createApp(ctx));
   const harness: RunsHarness = {
     tdb,
     source,
     ctx,
-    base: `http://127.0.0.1:${(server.address() as AddressInfo).port}`,
+    base: served.url,
     jobs: undefined,
     async startWorkers() {
       jobs = startJobs(ctx, FAST_QUEUE);
@@ -58,10 +53,8 @@ export async function startRunsHarness(label: string, options: { workers?: boole
       harness.jobs = undefined;
     },
     async close() {
-      server.closeAllConnections();
-      await new Promise<void>((r) => server.close(() => r()));
+      await served.close();
       await harness.stopWorkers();
-      await closeAuth(app);
       await tdb.drop();
     },
   };

@@ -1,36 +1,17 @@
 import { existsSync, readFileSync } from 'node:fs';
-import { createServer, type Server } from 'node:http';
-import type { AddressInfo } from 'node:net';
 import { join } from 'node:path';
-import type express from 'express';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { closeAuth } from '../src/auth/install-auth';
-import { createApp, createDataSource, createLogger, Database } from '../src/index';
+import { createApp } from '../src/index';
 import { defaultWebDist } from '../src/web-dist';
+import { serveApp, type ServedApp } from './support/listen';
 import { testContext } from './support/test-context';
+import { unreachableDatabase } from './support/test-database';
 
 // Headers need no database: the app runs against an address where nothing listens.
-const db = new Database(createDataSource('postgres://cairn@127.0.0.1:9/cairn_unit'), createLogger('silent'));
+const db = unreachableDatabase();
 const webDist = defaultWebDist();
 
-interface Running {
-  base: string;
-  app: express.Express;
-  server: Server;
-}
-
-async function start(env: Record<string, string> = {}): Promise<Running> {
-  const app = createApp(testContext(db, { webDist }, env));
-  const server = createServer(app);
-  await new Promise<void>((r) => server.listen(0, '127.0.0.1', r));
-  return { app, server, base: `http://127.0.0.1:${(server.address() as AddressInfo).port}` };
-}
-
-async function stop(r: Running | undefined): Promise<void> {
-  if (!r) return;
-  await new Promise<void>((done) => r.server.close(() => done()));
-  await closeAuth(r.app);
-}
+const start = (env: Record<string, string> = {}): Promise<ServedApp> => serveApp(createApp(testContext(db, { webDist }, env)));
 
 /** The policy as directive -> sources. */
 function policyOf(header: string | null): Map<string, string[]> {
@@ -42,16 +23,16 @@ function policyOf(header: string | null): Map<string, string[]> {
   return policy;
 }
 
-let plain: Running;
+let plain: ServedApp;
 
 beforeAll(async () => {
   plain = await start();
 });
-afterAll(() => stop(plain));
+afterAll(() => plain?.close());
 
 describe('security headers', () => {
   it('sends a strict Content-Security-Policy, nosniff and no framing on API answers', async () => {
-    const res = await fetch(`${plain.base}/api/health`);
+    const res = await fetch(`${plain.url}/api/health`);
     const policy = policyOf(res.headers.get('content-security-policy'));
     expect(policy.get('default-src')).toEqual(["'self'"]);
     expect(policy.get('script-src')).toEqual(["'self'"]);
@@ -77,17 +58,17 @@ describe('security headers', () => {
   it('adds HSTS and upgrade-insecure-requests when the public URL is https', async () => {
     const secure = await start({ CAIRN_PUBLIC_URL: 'https://cairn.example' });
     try {
-      const res = await fetch(`${secure.base}/api/health`);
+      const res = await fetch(`${secure.url}/api/health`);
       expect(res.headers.get('strict-transport-security')).toMatch(/^max-age=\d+; includeSubDomains$/);
       expect(policyOf(res.headers.get('content-security-policy')).has('upgrade-insecure-requests')).toBe(true);
     } finally {
-      await stop(secure);
+      await secure.close();
     }
   });
 
   it('lets the built web app load under the policy: no inline script or style, every asset from this origin', async () => {
     expect(existsSync(join(webDist, 'index.html')), 'build the web app first (pnpm build)').toBe(true);
-    const res = await fetch(`${plain.base}/`);
+    const res = await fetch(`${plain.url}/`);
     expect(res.status).toBe(200);
     expect(policyOf(res.headers.get('content-security-policy')).get('script-src')).toEqual(["'self'"]);
     const html = await res.text();
@@ -108,7 +89,7 @@ describe('security headers', () => {
     for (const asset of assets) {
       // Same origin: a path on this server, not another host.
       expect(asset, asset).toMatch(/^\/(?!\/)/);
-      const got = await fetch(`${plain.base}${asset}`);
+      const got = await fetch(`${plain.url}${asset}`);
       expect(got.status, asset).toBe(200);
       if (asset.endsWith('.css')) stylesheets.push(await got.text());
       else await got.arrayBuffer();
@@ -123,7 +104,7 @@ describe('security headers', () => {
           continue;
         }
         expect(url, url).toMatch(/^\/(?!\/)/);
-        const got = await fetch(`${plain.base}${url}`);
+        const got = await fetch(`${plain.url}${url}`);
         expect(got.status, url).toBe(200);
         await got.arrayBuffer();
       }

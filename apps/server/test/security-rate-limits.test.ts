@@ -1,9 +1,6 @@
-import { createServer, type Server } from 'node:http';
-import type { AddressInfo } from 'node:net';
-import type express from 'express';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { closeAuth } from '../src/auth/install-auth';
 import { createApp } from '../src/index';
+import { serveApp, type ServedApp } from './support/listen';
 import { createTestDatabase, type TestDatabase } from './support/test-database';
 import { testContext } from './support/test-context';
 import { insertMemberWithKey } from './support/test-key';
@@ -12,8 +9,7 @@ import { insertMemberWithKey } from './support/test-key';
 const LIMIT = 5;
 
 let tdb: TestDatabase;
-let app: express.Express;
-let server: Server;
+let served: ServedApp;
 let base: string;
 let first: string;
 let second: string;
@@ -23,15 +19,12 @@ beforeAll(async () => {
   const source = await tdb.db.connect();
   first = (await insertMemberWithKey(source, 'first-limited', 'researcher')).authorization;
   second = (await insertMemberWithKey(source, 'second-limited', 'researcher')).authorization;
-  app = createApp(testContext(tdb.db, {}, { CAIRN_RATE_LIMIT_PER_MINUTE: String(LIMIT) }));
-  server = createServer(app);
-  await new Promise<void>((r) => server.listen(0, '127.0.0.1', r));
-  base = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
+  served = await serveApp(createApp(testContext(tdb.db, {}, { CAIRN_RATE_LIMIT_PER_MINUTE: String(LIMIT) })));
+  base = served.url;
 });
 
 afterAll(async () => {
-  await new Promise<void>((r) => server?.close(() => r()));
-  if (app) await closeAuth(app);
+  await served?.close();
   await tdb?.drop();
 });
 

@@ -1,33 +1,15 @@
-import { createServer, type Server } from 'node:http';
-import type { AddressInfo } from 'node:net';
 import { createHash } from 'node:crypto';
 import { EnginePool } from '@cairn/engine/pool';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { closeAuth } from '../src/auth/install-auth';
 import { createApp } from '../src/index';
 import { uploadForEngine } from '../src/services/graphs';
+import { serveApp, type ServedApp } from './support/listen';
 import { createTestDatabase, type TestDatabase } from './support/test-database';
 import { testContext } from './support/test-context';
 import { insertMemberWithKey } from './support/test-key';
 
 // Uploads against the real PostgreSQL, through the whole app (Bearer keys, multer, the engine's readers).
-interface RunningApp {
-  base: string;
-  close(): Promise<void>;
-}
-
-async function startApp(tdb: TestDatabase, env: Record<string, string> = {}): Promise<RunningApp> {
-  const app = createApp(testContext(tdb.db, {}, env));
-  const server: Server = createServer(app);
-  await new Promise<void>((r) => server.listen(0, '127.0.0.1', r));
-  return {
-    base: `http://127.0.0.1:${(server.address() as AddressInfo).port}`,
-    close: async () => {
-      await new Promise<void>((r) => server.close(() => r()));
-      await closeAuth(app);
-    },
-  };
-}
+const startApp = (tdb: TestDatabase, env: Record<string, string> = {}): Promise<ServedApp> => serveApp(createApp(testContext(tdb.db, {}, env)));
 
 interface ErrorBody {
   error: { code: string; message: string; details?: Record<string, unknown> };
@@ -51,7 +33,7 @@ interface UploadBody {
 }
 
 let tdb: TestDatabase;
-let app: RunningApp;
+let app: ServedApp;
 let alice: { userId: string; authorization: string };
 let bob: { userId: string; authorization: string };
 let admin: { userId: string; authorization: string };
@@ -79,7 +61,7 @@ function form(content: string | Uint8Array, fileName: string, fields: Record<str
   return body;
 }
 
-async function upload(authorization: string, body: FormData, base = app.base): Promise<Response> {
+async function upload(authorization: string, body: FormData, base = app.url): Promise<Response> {
   return fetch(`${base}/api/v1/graphs`, { method: 'POST', headers: { authorization }, body });
 }
 
@@ -142,7 +124,7 @@ describe('uploading each format', () => {
     expect(res.status).toBe(201);
     const body = (await res.json()) as UploadBody;
     expect(body.graph.name).toBe('größe-ü.edges');
-    const content = await fetch(`${app.base}/api/v1/graphs/${body.graph.id}/content`, { headers: { authorization: alice.authorization } });
+    const content = await fetch(`${app.url}/api/v1/graphs/${body.graph.id}/content`, { headers: { authorization: alice.authorization } });
     expect(content.headers.get('content-disposition')).toContain(`filename*=UTF-8''${encodeURIComponent('größe-ü.edges')}`);
   });
 
@@ -246,7 +228,7 @@ describe('refused uploads', () => {
     expect(body.error.code).toBe('invalid_request');
     expect(body.error.message).toMatch(/^body\.file: /);
 
-    res = await fetch(`${app.base}/api/v1/graphs`, { method: 'POST', headers: { authorization: alice.authorization, 'content-type': 'application/json' }, body: '{"file": "0 1"}' });
+    res = await fetch(`${app.url}/api/v1/graphs`, { method: 'POST', headers: { authorization: alice.authorization, 'content-type': 'application/json' }, body: '{"file": "0 1"}' });
     expect(res.status).toBe(400);
     expect(((await res.json()) as ErrorBody).error.message).toMatch(/^body\.file: send multipart\/form-data/);
 
@@ -272,7 +254,7 @@ describe('refused uploads', () => {
   });
 
   it('answers a broken multipart body with a JSON 400', async () => {
-    const res = await fetch(`${app.base}/api/v1/graphs`, {
+    const res = await fetch(`${app.url}/api/v1/graphs`, {
       method: 'POST',
       headers: { authorization: alice.authorization, 'content-type': 'multipart/form-data; boundary=xyz' },
       body: '--xyz\r\nContent-Disposition: form-data; name="file"; filename="a.edges"\r\n\r\n0 1\n',
@@ -282,7 +264,7 @@ describe('refused uploads', () => {
   });
 
   it('needs runs:write: anonymous 401, a read-only viewer key 403', async () => {
-    let res = await fetch(`${app.base}/api/v1/graphs`, { method: 'POST', body: form(PATH5_EDGES, 'p5.edges') });
+    let res = await fetch(`${app.url}/api/v1/graphs`, { method: 'POST', body: form(PATH5_EDGES, 'p5.edges') });
     expect(res.status).toBe(401);
     res = await upload(viewer.authorization, form(PATH5_EDGES, 'p5.edges'));
     expect(res.status).toBe(403);
@@ -295,10 +277,10 @@ describe('refused uploads', () => {
     try {
       const exact = `0 1\n# ${'x'.repeat(limitBytes - 7)}\n`;
       expect(Buffer.byteLength(exact)).toBe(limitBytes);
-      const ok = await upload(alice.authorization, form(exact, 'exact.edges'), small.base);
+      const ok = await upload(alice.authorization, form(exact, 'exact.edges'), small.url);
       expect(ok.status).toBe(201);
       const before = await graphCount();
-      const res = await upload(alice.authorization, form(`${exact}1 2\n`, 'big.edges'), small.base);
+      const res = await upload(alice.authorization, form(`${exact}1 2\n`, 'big.edges'), small.url);
       expect(res.status).toBe(413);
       const body = (await res.json()) as ErrorBody;
       expect(body.error.code).toBe('file_too_large');
@@ -320,7 +302,7 @@ describe('reading, listing and deleting uploads', () => {
     bobGraph = ((await (await upload(bob.authorization, form('0 1\n1 2\n2 3\n3 0\n0 2\n', 'diamond.edges'))).json()) as UploadBody).graph;
   });
 
-  const get = (path: string, authorization: string) => fetch(`${app.base}/api/v1${path}`, { headers: { authorization } });
+  const get = (path: string, authorization: string) => fetch(`${app.url}/api/v1${path}`, { headers: { authorization } });
 
   it('shows a graph to its owner and to an admin, and is a 404 to anyone else', async () => {
     let res = await get(`/graphs/${aliceGraph.id}`, alice.authorization);
@@ -370,7 +352,7 @@ describe('reading, listing and deleting uploads', () => {
   });
 
   it('deletes a graph for its owner or an admin, not for others, and not while a run uses it (409)', async () => {
-    const del = (id: string, authorization: string) => fetch(`${app.base}/api/v1/graphs/${id}`, { method: 'DELETE', headers: { authorization } });
+    const del = (id: string, authorization: string) => fetch(`${app.url}/api/v1/graphs/${id}`, { method: 'DELETE', headers: { authorization } });
     expect((await del(bobGraph.id, alice.authorization)).status).toBe(404);
 
     const source = await tdb.db.connect();

@@ -1,12 +1,11 @@
-import { createServer, type Server } from 'node:http';
-import type { AddressInfo } from 'node:net';
 import express from 'express';
 import { bestUpperBound, cycleGraph, gridGraph, pathGraph, type Graph } from '@cairn/engine';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { closeAuth, installAuth } from '../src/auth/install-auth';
+import { installAuth } from '../src/auth/install-auth';
 import { errorHandler } from '../src/http/errors';
 import { createApp } from '../src/index';
 import { verifyRouter } from '../src/routes/verify.router';
+import { serveApp, type ServedApp } from './support/listen';
 import { createTestDatabase, type TestDatabase } from './support/test-database';
 import { testContext } from './support/test-context';
 import { insertMemberWithKey } from './support/test-key';
@@ -24,18 +23,11 @@ interface Verdict {
 }
 
 let tdb: TestDatabase;
-let server: Server;
-let app: express.Express;
+let served: ServedApp;
 let base: string;
 let alice: { authorization: string };
 let bob: { authorization: string };
 let viewer: { authorization: string };
-
-async function listen(handler: express.Express): Promise<{ server: Server; base: string }> {
-  const s = createServer(handler);
-  await new Promise<void>((r) => s.listen(0, '127.0.0.1', r));
-  return { server: s, base: `http://127.0.0.1:${(s.address() as AddressInfo).port}` };
-}
 
 beforeAll(async () => {
   tdb = await createTestDatabase('verify_rankings');
@@ -43,13 +35,12 @@ beforeAll(async () => {
   alice = await insertMemberWithKey(source, 'alice-verify', 'researcher');
   bob = await insertMemberWithKey(source, 'bob-verify', 'researcher');
   viewer = await insertMemberWithKey(source, 'viewer-verify', 'viewer', ['runs:read']);
-  app = createApp(testContext(tdb.db));
-  ({ server, base } = await listen(app));
+  served = await serveApp(createApp(testContext(tdb.db)));
+  base = served.url;
 });
 
 afterAll(async () => {
-  await new Promise<void>((r) => server?.close(() => r()));
-  if (app) await closeAuth(app);
+  await served?.close();
   await tdb?.drop();
 });
 
@@ -234,30 +225,26 @@ describe('verifying against an uploaded graph', () => {
 
 describe("the verify route's own body limit", () => {
   // The route parses bodies up to 32 MB itself; this app mounts it without any other body parser.
-  let own: { server: Server; base: string };
-  let bare: express.Express;
+  let own: ServedApp;
 
   beforeAll(async () => {
-    bare = express();
+    const bare = express();
     installAuth(bare, testContext(tdb.db));
     bare.use('/api/v1', verifyRouter(testContext(tdb.db)));
     bare.use(errorHandler(testContext(tdb.db).logger));
-    own = await listen(bare);
+    own = await serveApp(bare);
   });
 
-  afterAll(async () => {
-    await new Promise<void>((r) => own.server.close(() => r()));
-    await closeAuth(bare);
-  });
+  afterAll(() => own?.close());
 
   it('takes labels of megabytes and refuses a body over 32 MB with a JSON 413', async () => {
     const n = 1_000_000;
     const body = { spec: `path:${n}`, labels: rulerLabels(n) };
     expect(JSON.stringify(body).length).toBeGreaterThan(1024 * 1024); // beyond the 1 MB the rest of the API takes
-    expect(await verdictOf(await verify(body, alice.authorization, own.base))).toEqual({ valid: true, labelCount: 20, maxLabel: 20, vertexCount: n });
+    expect(await verdictOf(await verify(body, alice.authorization, own.url))).toEqual({ valid: true, labelCount: 20, maxLabel: 20, vertexCount: n });
 
     const huge = `{"spec": "path:3", "labels": [${'1,'.repeat(17 * 1024 * 1024)}1]}`;
-    const res = await fetch(`${own.base}/api/v1/verify`, { method: 'POST', headers: { authorization: alice.authorization, 'content-type': 'application/json' }, body: huge });
+    const res = await fetch(`${own.url}/api/v1/verify`, { method: 'POST', headers: { authorization: alice.authorization, 'content-type': 'application/json' }, body: huge });
     expect(res.status).toBe(413);
     expect(((await res.json()) as ErrorBody).error.code).toBe('body_too_large');
   });

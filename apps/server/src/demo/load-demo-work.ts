@@ -43,12 +43,12 @@ export async function loadDemoWork(ctx: ServerContext, source: DataSource): Prom
 
   let sweeps = 0;
   const sweep: SweepRequest = SweepRequestSchema.parse({
-    name: 'Four-row grids, 4 x 1 to 4 x 10',
+    name: 'Four-row grids, 4 x 1 to 4 x 8',
     family: 'grid',
     rows: { from: 4, to: 4 },
-    cols: { from: 1, to: 10 },
+    cols: { from: 1, to: 8 },
     method: 'auto',
-    timeLimitSeconds: 20,
+    timeLimitSeconds: 15,
     visibility: 'public',
   });
   const [existing] = (await source.query(`SELECT id FROM sweeps WHERE owner_id = $1 AND name = $2`, [tobias.user.id, sweep.name])) as { id: string }[];

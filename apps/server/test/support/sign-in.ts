@@ -1,5 +1,3 @@
-import { createServer } from 'node:http';
-import type { AddressInfo } from 'node:net';
 import type { MeResponse } from '@cairn/schema';
 import type { Express } from 'express';
 import { createApp, type AppContext } from '../../src/app';
@@ -7,8 +5,8 @@ import { closeAuth } from '../../src/auth/install-auth';
 import { signInProvider } from '../../src/auth/sign-in-provider';
 import type { Database } from '../../src/db/database';
 import { startDevServices, type DevServices } from '../../src/dev/dev-services';
-import { closeServer } from '../../src/http/listen';
 import { createLogger } from '../../src/logger';
+import { listenOnLoopback } from './listen';
 import { testContext } from './test-context';
 
 /** An app under test whose sign-in goes through the real local provider (both on loopback, port 0). */
@@ -26,9 +24,7 @@ export interface SignInApp {
  */
 export async function startSignInApp(db: Database, env: Record<string, string> = {}, overrides: Partial<AppContext> = {}): Promise<SignInApp> {
   const dev = await startDevServices('127.0.0.1', 0, 0, createLogger('silent'));
-  const server = createServer();
-  await new Promise<void>((r) => server.listen(0, '127.0.0.1', r));
-  const url = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
+  const { url, server, close } = await listenOnLoopback();
   const base = testContext(db, overrides, { CAIRN_PUBLIC_URL: url, ...env });
   // `signIn: undefined` in the overrides asks for an app without sign-in.
   const ctx: AppContext = { ...base, signIn: 'signIn' in overrides ? overrides.signIn : signInProvider(base.config, dev.url) };
@@ -40,8 +36,7 @@ export async function startSignInApp(db: Database, env: Record<string, string> =
     ctx,
     dev,
     close: async () => {
-      // Nothing is in flight when a test closes; a response body left unread must not hold the close up.
-      await closeServer(server, 200);
+      await close();
       await closeAuth(app);
       await dev.close();
     },

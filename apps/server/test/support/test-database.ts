@@ -7,6 +7,12 @@ const port = Number(process.env.CAIRN_DB_PORT ?? 54780);
 const user = process.env.CAIRN_DB_USER ?? 'cairn';
 export const databaseUrlFor = (name: string) => `postgres://${user}@${host}:${port}/${name}`;
 
+/** A database URL on a port where nothing listens (port 9, discard, is closed on loopback here). */
+export const UNREACHABLE_DATABASE_URL = 'postgres://cairn@127.0.0.1:9/cairn_unit';
+
+/** A Database at UNREACHABLE_DATABASE_URL, for the app without its database (no query ever succeeds). */
+export const unreachableDatabase = (logger = createLogger('silent')) => new Database(createDataSource(UNREACHABLE_DATABASE_URL), logger);
+
 export interface TestDatabase {
   name: string;
   url: string;
