@@ -16,7 +16,7 @@ let key: string;
 
 /** Runs the built command with its own config directory and no key in the environment. */
 function cairn(args: string[]): Promise<{ code: number; stdout: string; stderr: string }> {
-  const env = { ...process.env, XDG_CONFIG_HOME: config };
+  const env: NodeJS.ProcessEnv = { ...process.env, XDG_CONFIG_HOME: config };
   delete env.CAIRN_API_KEY;
   delete env.CAIRN_SERVER;
   return new Promise((resolve) => {

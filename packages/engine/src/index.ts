@@ -70,6 +70,15 @@ export { gridLowerBounds } from './bounds/grid-lower-bounds';
 export type { GridLowerBound } from './bounds/grid-lower-bounds';
 export { boundsTable } from './bounds/bounds-table';
 export type { BoundsTableRow } from './bounds/bounds-table';
+export { diagonalSplitWins } from './bounds/bounds-table';
+export { DiagonalSplit, diagonalSplitRanking } from './bounds/diagonal-split';
+export type { DiagonalCut } from './bounds/diagonal-split';
+export { StaircaseRanking, staircaseRanking, staircaseVertex } from './bounds/staircase-ranking';
+export { FourRowDoubling, fourRowDoublingRanking } from './bounds/four-row-doubling';
+export { BevelledSplit } from './bounds/bevelled-split';
+export type { BevelledSplitOptions, BoxMove } from './bounds/bevelled-split';
+export { cellCount as boxCellCount, rectangleBox, staircaseBox } from './bounds/bevelled-box';
+export type { Box as BevelledBox } from './bounds/bevelled-box';
 export { solve } from './solve/solve';
 export type { Solution, SolveMethod, SolveOptions } from './solve/solve';
 

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { boundsTable, exactTreeDepth, gridGraph, gridLowerBounds } from '../src/index';
+import { boundsTable, DiagonalSplit, diagonalSplitWins, exactTreeDepth, gridGraph, gridLowerBounds, MidlineSplit } from '../src/index';
 import { bruteForceTreeDepth } from './brute-force-td';
 
 describe('grid lower bounds and the bounds table', () => {
@@ -25,5 +25,22 @@ describe('grid lower bounds and the bounds table', () => {
       else expect(row.formula).toBeNull();
     }
     expect(table.find((r) => r.rows === 2 && r.cols === 9)).toMatchObject({ formula: 6, lower: 6 });
+  });
+
+  it('puts the diagonal split beside the midline split, and reports where it needs fewer labels', () => {
+    const table = boundsTable(25);
+    const diagonal = new DiagonalSplit();
+    const midline = new MidlineSplit();
+    for (const row of table) {
+      expect(row.lower, `${row.rows}x${row.cols}`).toBeLessThanOrEqual(row.diagonalSplit);
+      expect(row.diagonalSplit).toBe(diagonal.value(row.rows, row.cols));
+      expect(row.midlineSplit).toBe(midline.value(row.rows, row.cols));
+      // A closed form is the rank number itself, so no ranking can go below it.
+      if (row.formula !== null) expect(row.diagonalSplit).toBeGreaterThanOrEqual(row.formula);
+    }
+    const wins = diagonalSplitWins(table);
+    expect(wins).toEqual(table.filter((r) => r.diagonalSplit < r.midlineSplit));
+    // Every square from 4 x 4 up is among them (the diagonal-split tests check these sizes one by one).
+    for (let n = 4; n <= 25; n++) expect(wins.some((r) => r.rows === n && r.cols === n), `${n}x${n}`).toBe(true);
   });
 });

@@ -102,6 +102,35 @@ describe('upper-bound constructions', () => {
     expect(bestUpperBound(gridGraph(40, 40)).all.map((b) => b.construction)).toContain('midline-split');
   });
 
+  it('include the grid and staircase constructions where they apply, each proving its value, and name the winner', () => {
+    const cases: [Graph, string[]][] = [
+      [gridGraph(4, 30), ['midline-split', 'diagonal-split', 'bevelled-split', 'four-row-doubling']],
+      [gridGraph(30, 4), ['midline-split', 'diagonal-split', 'bevelled-split', 'four-row-doubling']],
+      [gridGraph(17, 19), ['midline-split', 'diagonal-split', 'bevelled-split']],
+      [staircaseGraph(20), ['staircase-split']],
+    ];
+    for (const [g, names] of cases) {
+      const { best, all } = bestUpperBound(g);
+      const what = `${g.family?.kind} ${JSON.stringify(g.family)}`;
+      for (const name of names) expect(all.map((b) => b.construction), what).toContain(name);
+      for (const b of all) expectProves(g, b, what);
+      expect(best.value).toBe(Math.min(...all.map((b) => b.value)));
+      expect(best).toBe(all[0]);
+    }
+    // Where the four-row doubling alone is lowest, it is the one reported (and it is, on some 4 x n).
+    let alone = 0;
+    for (let n = 5; n <= 40; n++) {
+      const { best, all } = bestUpperBound(gridGraph(4, n));
+      const doubling = all.find((b) => b.construction === 'four-row-doubling')!;
+      if (all.every((b) => b === doubling || b.value > doubling.value)) {
+        expect(best.construction, `4x${n}`).toBe('four-row-doubling');
+        alone++;
+      }
+    }
+    expect(alone).toBeGreaterThan(0);
+    expect(bestUpperBound(gridGraph(4, 4)).best.value).toBe(bruteForceTreeDepth(gridGraph(4, 4)));
+  });
+
   it('handle a 10^5-cell mesh with holes', () => {
     const g = randomMask(320, 320, 0.9, 5);
     expectProves(g, nestedDissectionRanking(g), 'mesh');

@@ -1,8 +1,12 @@
 import type { Graph } from '../graph/graph';
 import { isForest } from '../graph/is-forest';
+import { BevelledSplit } from './bevelled-split';
+import { DiagonalSplit } from './diagonal-split';
+import { FourRowDoubling } from './four-row-doubling';
 import { greedyEliminationRanking } from './greedy-elimination';
 import { MidlineSplit } from './midline-split';
 import { nestedDissectionRanking } from './nested-dissection';
+import { StaircaseRanking } from './staircase-ranking';
 import { optimalTreeRanking } from './tree-ranking';
 import type { UpperBound } from './upper-bound';
 
@@ -13,8 +17,11 @@ export interface BestUpperBound {
 }
 
 /**
- * Runs every construction that applies to g and keeps the lowest: the optimal tree ranking for forests,
- * the midline split for full grids, nested dissection and greedy elimination for anything.
+ * Runs every construction that applies to g and keeps the lowest (the first listed on ties): the optimal
+ * tree ranking for forests; for full grids the midline split, the diagonal split, the bevelled split of
+ * the whole rectangle and, with 4 rows or 4 columns, the four-row doubling; the staircase construction
+ * for staircases; nested dissection and greedy elimination for anything. Each says in `construction`
+ * which it is.
  */
 export function bestUpperBound(g: Graph): BestUpperBound {
   const all: UpperBound[] = [];
@@ -27,10 +34,18 @@ export function bestUpperBound(g: Graph): BestUpperBound {
     const labels = optimalTreeRanking(g);
     all.push({ value: maxOf(labels), labels, construction: 'tree-optimal', argument: 'optimal ranking of a forest (Schäffer, Inform. Process. Lett. 1989)' });
   }
-  if (g.family?.kind === 'grid') all.push(new MidlineSplit().ranking(g.family.rows, g.family.cols));
+  const f = g.family;
+  if (f?.kind === 'grid') {
+    all.push(new MidlineSplit().ranking(f.rows, f.cols));
+    const split = new BevelledSplit(); // one memo for both: the diagonal split's pieces recur inside the rectangle's
+    all.push(new DiagonalSplit(split).ranking(f.rows, f.cols));
+    all.push(split.rectangleRanking(f.rows, f.cols));
+    if (f.rows === 4 || f.cols === 4) all.push(new FourRowDoubling().gridRanking(f.rows, f.cols));
+  }
+  if (f?.kind === 'staircase') all.push(new StaircaseRanking().ranking(f.t));
   all.push(nestedDissectionRanking(g));
   all.push(greedyEliminationRanking(g));
-  all.sort((a, b) => a.value - b.value);
+  all.sort((a, b) => a.value - b.value); // stable: ties keep the order above
   return { best: all[0]!, all };
 }
 
