@@ -335,11 +335,7 @@ describe('researcher flows in Chromium', () => {
     expect(await reader.getByTestId('run-value').count()).toBe(0);
   });
 
-  // it.skip — APP BUG: after the share box has mailed the link, making the run private again revokes the link
-  // on the server, but the run page keeps showing it as "Share link" (with its Copy button) until reload.
-  // apps/web/src/components/run/Sharing.tsx, ShareBox: `const link = share.data?.url ?? run.links.shared`
-  // prefers the finished mail mutation's URL over the run's current links.shared (null once private).
-  it.skip('stops showing the share link once the run is private again, also after a mail share', async () => {
+  it('stops showing the share link once the run is private again, also after a mail share', async () => {
     const made = await app.api('/api/v1/runs', { method: 'POST', body: { spec: 'path:9', timeLimitSeconds: 10 } });
     expect(made.status).toBe(202);
     const { page } = researcher;

@@ -1,19 +1,9 @@
 import type { ApiKeyInfo } from '@cairn/schema';
-import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
-import { cleanup, fireEvent, render, screen, waitFor, within } from '@testing-library/react';
-import { createMemoryRouter, RouterProvider } from 'react-router';
+import { cleanup, fireEvent, screen, waitFor, within } from '@testing-library/react';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { AdminPage } from '../src/pages/AdminPage';
+import { json, ME_ADMIN, on, renderRoutes, stubFetch, uuid as id, type Route } from './support/render-page';
 
-const id = (n: number) => `00000000-0000-4000-8000-${String(n).padStart(12, '0')}`;
-
-const admin = {
-  user: { id: id(1), login: 'root-admin', displayName: null, email: null, role: 'admin', notifyOnFinish: false },
-  via: 'session',
-  permissions: ['runs:read', 'runs:write', 'atlas:read', 'admin'],
-  csrfToken: 'csrf-admin',
-  signIn: { provider: 'local' },
-};
 const users = [
   { id: id(1), login: 'root-admin', displayName: null, email: null, role: 'admin', createdAt: '2026-01-01T09:00:00.000Z' },
   { id: id(2), login: 'joinery-bot', displayName: 'Workshop planner', email: 'plans@joinery.example', role: 'researcher', createdAt: '2026-01-02T09:00:00.000Z' },
@@ -30,49 +20,29 @@ const key = (n: number, over: Partial<ApiKeyInfo> = {}): ApiKeyInfo => ({
   ...over,
 });
 
-interface Call {
-  method: string;
-  path: string;
-  body: unknown;
-  headers: Record<string, string>;
-}
-
+/** The admin routes over two keys, the second revoked: POST adds key 3, DELETE revokes the key it names. */
 function stubAdminApi() {
-  const calls: Call[] = [];
   let keys: ApiKeyInfo[] = [key(1), key(2, { revokedAt: '2026-01-04T09:00:00.000Z', lastUsedAt: '2026-01-03T12:00:00.000Z' })];
-  vi.stubGlobal(
-    'fetch',
-    vi.fn(async (input: RequestInfo | URL, init?: RequestInit) => {
-      const url = new URL(String(input), 'http://cairn.test');
-      const method = init?.method ?? 'GET';
-      calls.push({ method, path: url.pathname, body: init?.body ? JSON.parse(String(init.body)) : undefined, headers: (init?.headers ?? {}) as Record<string, string> });
-      const reply = (status: number, body?: unknown) => new Response(body === undefined ? null : JSON.stringify(body), { status, headers: { 'content-type': 'application/json' } });
-      const route = `${method} ${url.pathname}`;
-      if (route === 'GET /api/v1/me') return reply(200, admin);
-      if (route === 'GET /api/v1/users') return reply(200, { users });
-      if (route === 'GET /api/v1/keys') return reply(200, { keys });
-      if (route === 'POST /api/v1/keys') {
-        const made = key(3, { name: 'nightly plan export', scopes: ['runs:read', 'runs:write'] });
-        keys = [made, ...keys];
-        return reply(201, { key: made, secret: 'cairn_k3ab_s3cr3t-value-only-once' });
-      }
-      if (method === 'DELETE' && url.pathname.startsWith('/api/v1/keys/')) {
-        keys = keys.map((k) => (url.pathname.endsWith(k.id) ? { ...k, revokedAt: '2026-01-06T09:00:00.000Z' } : k));
-        return reply(204);
-      }
-      return reply(404, { error: { code: 'not_found', message: `no route ${route}` } });
+  const revoke: Route = (url, init) => {
+    if (init?.method !== 'DELETE' || !url.pathname.startsWith('/api/v1/keys/')) return undefined;
+    keys = keys.map((k) => (url.pathname.endsWith(k.id) ? { ...k, revokedAt: '2026-01-06T09:00:00.000Z' } : k));
+    return json(204);
+  };
+  return stubFetch(
+    on('GET', '/api/v1/me', () => json(200, ME_ADMIN)),
+    on('GET', '/api/v1/users', () => json(200, { users })),
+    on('GET', '/api/v1/keys', () => json(200, { keys })),
+    on('POST', '/api/v1/keys', () => {
+      const made = key(3, { name: 'nightly plan export', scopes: ['runs:read', 'runs:write'] });
+      keys = [made, ...keys];
+      return json(201, { key: made, secret: 'cairn_k3ab_s3cr3t-value-only-once' });
     }),
+    revoke,
   );
-  return calls;
 }
 
 async function renderKeys() {
-  const router = createMemoryRouter([{ path: '/admin/*', element: <AdminPage /> }], { initialEntries: ['/admin/keys'] });
-  render(
-    <QueryClientProvider client={new QueryClient({ defaultOptions: { queries: { retry: false }, mutations: { retry: false } } })}>
-      <RouterProvider router={router} />
-    </QueryClientProvider>,
-  );
+  renderRoutes([{ path: '/admin/*', element: <AdminPage /> }], '/admin/keys');
   return screen.findByTestId('keys-table');
 }
 
@@ -151,7 +121,7 @@ describe('Admin · API keys', () => {
     fireEvent.click(screen.getByRole('button', { name: 'Revoke script 1 (cairn_k1ab)' }));
     fireEvent.click(within(screen.getByRole('alertdialog')).getByRole('button', { name: 'Revoke key' }));
     await waitFor(() => expect(screen.queryByRole('alertdialog')).toBeNull());
-    expect(deletes().map((c) => c.path)).toEqual([`/api/v1/keys/${id(101)}`]);
+    expect(deletes().map((c) => c.url)).toEqual([`/api/v1/keys/${id(101)}`]);
     expect(deletes()[0]!.headers['x-csrf-token']).toBe('csrf-admin');
     // Refetched: the key now shows as revoked, with no button left.
     await waitFor(() => expect(screen.queryByRole('button', { name: 'Revoke script 1 (cairn_k1ab)' })).toBeNull());

@@ -1,53 +1,26 @@
-import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
-import { cleanup, fireEvent, render, screen, waitFor, within } from '@testing-library/react';
-import { createMemoryRouter, RouterProvider } from 'react-router';
+import type { MeResponse } from '@cairn/schema';
+import { cleanup, fireEvent, screen, waitFor, within } from '@testing-library/react';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { AdminPage } from '../src/pages/AdminPage';
+import { bodyOf, json, ME_ADMIN, on, renderRoutes, stubFetch, uuid as id, type Route, type SentRequest } from './support/render-page';
 
-const id = (n: number) => `00000000-0000-4000-8000-${String(n).padStart(12, '0')}`;
-
-const admin = {
-  user: { id: id(1), login: 'root-admin', displayName: null, email: null, role: 'admin', notifyOnFinish: false },
-  via: 'session',
-  permissions: ['runs:read', 'runs:write', 'atlas:read', 'admin'],
-  csrfToken: 'csrf-admin',
-  signIn: { provider: 'local' },
-};
 const member = (n: number, login: string, role: string) => ({ id: id(n), login, displayName: null, email: `${login}@seminar.example`, role, createdAt: '2026-01-02T09:00:00.000Z' });
 
-interface Call {
-  method: string;
-  path: string;
-  body: unknown;
-}
 type Reply = { status: number; body?: unknown };
 
-function stubApi(routes: Record<string, Reply | ((body: unknown) => Reply)>, me: unknown = admin): Call[] {
-  const calls: Call[] = [];
-  vi.stubGlobal(
-    'fetch',
-    vi.fn(async (input: RequestInfo | URL, init?: RequestInit) => {
-      const url = new URL(String(input), 'http://cairn.test');
-      const method = init?.method ?? 'GET';
-      const body = init?.body ? JSON.parse(String(init.body)) : undefined;
-      calls.push({ method, path: url.pathname, body });
-      const r = url.pathname === '/api/v1/me' ? { status: 200, body: me } : routes[`${method} ${url.pathname}`];
-      const reply = typeof r === 'function' ? r(body) : (r ?? { status: 404, body: { error: { code: 'not_found', message: 'no route' } } });
-      return new Response(reply.body === undefined ? null : JSON.stringify(reply.body), { status: reply.status, headers: { 'content-type': 'application/json' } });
-    }),
-  );
-  return calls;
+/** Answers /api/v1/me with `me` and each `METHOD /path` of `routes` with its reply, or with the reply made from the body sent. */
+function stubApi(routes: Record<string, Reply | ((body: unknown) => Reply)>, me: MeResponse = ME_ADMIN): SentRequest[] {
+  const answers: Route[] = Object.entries(routes).map(([route, r]) => {
+    const [method, path] = route.split(' ') as [string, string];
+    return on(method, path, (_url, init) => {
+      const reply = typeof r === 'function' ? r(bodyOf(init)) : r;
+      return json(reply.status, reply.body);
+    });
+  });
+  return stubFetch(on('GET', '/api/v1/me', () => json(200, me)), ...answers);
 }
 
-function renderAdmin(path: string) {
-  const router = createMemoryRouter([{ path: '/admin/*', element: <AdminPage /> }], { initialEntries: [path] });
-  render(
-    <QueryClientProvider client={new QueryClient({ defaultOptions: { queries: { retry: false }, mutations: { retry: false } } })}>
-      <RouterProvider router={router} />
-    </QueryClientProvider>,
-  );
-  return router;
-}
+const renderAdmin = (path: string) => renderRoutes([{ path: '/admin/*', element: <AdminPage /> }], path).router;
 
 afterEach(() => {
   cleanup();
@@ -70,7 +43,8 @@ describe('Admin · members', () => {
     expect(within(table).getAllByRole('row')).toHaveLength(3);
     fireEvent.change(screen.getByLabelText('Role of grace'), { target: { value: 'researcher' } });
     await waitFor(() => expect((screen.getByLabelText('Role of grace') as HTMLSelectElement).value).toBe('researcher'));
-    expect(calls.find((c) => c.method === 'PATCH')).toEqual({ method: 'PATCH', path: `/api/v1/users/${id(2)}`, body: { role: 'researcher' } });
+    const patch = calls.find((c) => c.method === 'PATCH')!;
+    expect({ method: patch.method, url: patch.url, body: patch.body }).toEqual({ method: 'PATCH', url: `/api/v1/users/${id(2)}`, body: { role: 'researcher' } });
   });
 
   it("shows the server's 409 when the last admin would be demoted, and keeps the role", async () => {
@@ -98,10 +72,10 @@ describe('Admin · members', () => {
 
 describe('Admin · access and mail', () => {
   it('tells a researcher the pages are for admins only, and asks nothing of the admin routes', async () => {
-    const calls = stubApi({}, { ...admin, user: { ...admin.user, role: 'researcher' }, permissions: ['runs:read', 'runs:write', 'atlas:read'] });
+    const calls = stubApi({}, { ...ME_ADMIN, user: { ...ME_ADMIN.user!, role: 'researcher' }, permissions: ['runs:read', 'runs:write', 'atlas:read'] });
     renderAdmin('/admin/keys');
     expect((await screen.findByTestId('admins-only')).textContent).toContain('your role (researcher) does not reach them');
-    expect(calls.map((c) => c.path)).toEqual(['/api/v1/me']);
+    expect(calls.map((c) => c.url)).toEqual(['/api/v1/me']);
   });
 
   it('says mail goes through a real service when the catcher route answers 404', async () => {

@@ -1,12 +1,9 @@
 import type { AtlasEntryView, AtlasList } from '@cairn/schema';
-import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
-import { cleanup, fireEvent, render, screen, waitFor, within } from '@testing-library/react';
-import { createMemoryRouter, MemoryRouter, RouterProvider } from 'react-router';
+import { cleanup, fireEvent, screen, waitFor, within } from '@testing-library/react';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { AtlasMatrix } from '../src/components/atlas/AtlasMatrix';
 import { AtlasPage } from '../src/pages/AtlasPage';
-
-const id = (n: number) => `00000000-0000-4000-8000-${String(n).padStart(12, '0')}`;
+import { always, json, renderRoutes, renderWithRouter, stubFetch, uuid as id } from './support/render-page';
 
 // Invented atlas rows for the drawing; the numbers are not claims about these grids.
 const entry = (rows: number, cols: number, lower: number, upper: number, over: Partial<AtlasEntryView> = {}): AtlasEntryView => ({
@@ -35,12 +32,8 @@ const entries = [
   entry(4, 4, 4, 7),
 ];
 
-const renderMatrix = () =>
-  render(
-    <MemoryRouter>
-      <AtlasMatrix family="grid" entries={entries} />
-    </MemoryRouter>,
-  );
+const renderMatrix = () => renderWithRouter(<AtlasMatrix family="grid" entries={entries} />);
+const renderAtlas = (path: string) => renderRoutes([{ path: '/atlas', element: <AtlasPage /> }], path);
 const cellAt = (r: number, c: number) => screen.getByTestId('atlas-matrix').querySelector<HTMLElement>(`[data-cell="${r}x${c}"]`)!;
 
 afterEach(() => {
@@ -103,22 +96,15 @@ describe('AtlasMatrix', () => {
 describe('AtlasPage table view', () => {
   it('sends the filters to GET /api/v1/atlas and pages by offset', async () => {
     const urls: URL[] = [];
-    vi.stubGlobal(
-      'fetch',
-      vi.fn(async (input: RequestInfo | URL) => {
-        const url = new URL(String(input), 'http://cairn.test');
+    stubFetch(
+      always((url) => {
         urls.push(url);
         const offset = Number(url.searchParams.get('offset'));
         const page: AtlasList = { entries: offset === 0 ? entries.slice(0, 3) : entries.slice(3), total: 28, nextOffset: offset === 0 ? 25 : null };
-        return new Response(JSON.stringify(page), { status: 200, headers: { 'content-type': 'application/json' } });
+        return json(200, page);
       }),
     );
-    const router = createMemoryRouter([{ path: '/atlas', element: <AtlasPage /> }], { initialEntries: ['/atlas?family=torus&view=table'] });
-    render(
-      <QueryClientProvider client={new QueryClient({ defaultOptions: { queries: { retry: false } } })}>
-        <RouterProvider router={router} />
-      </QueryClientProvider>,
-    );
+    renderAtlas('/atlas?family=torus&view=table');
     const table = await screen.findByTestId('atlas-table');
     expect(within(table).getAllByRole('row')).toHaveLength(4);
     expect(urls[0]!.searchParams.get('family')).toBe('torus');
@@ -142,13 +128,8 @@ describe('AtlasPage table view', () => {
   });
 
   it('reads signed out and says when the family has nothing yet', async () => {
-    vi.stubGlobal('fetch', vi.fn(async () => new Response(JSON.stringify({ entries: [], total: 0, nextOffset: null }), { status: 200 })));
-    const router = createMemoryRouter([{ path: '/atlas', element: <AtlasPage /> }], { initialEntries: ['/atlas?family=cylinder'] });
-    render(
-      <QueryClientProvider client={new QueryClient({ defaultOptions: { queries: { retry: false } } })}>
-        <RouterProvider router={router} />
-      </QueryClientProvider>,
-    );
+    stubFetch(always(() => json(200, { entries: [], total: 0, nextOffset: null })));
+    renderAtlas('/atlas?family=cylinder');
     expect(await screen.findByText(/No cylinder values are in the atlas yet/)).toBeTruthy();
   });
 });

@@ -1,16 +1,11 @@
-import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
-import { cleanup, render, screen } from '@testing-library/react';
+import { cleanup, screen } from '@testing-library/react';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { HealthStatus } from '../src/components/HealthStatus';
+import { always, json, renderWithClient, stubFetch } from './support/render-page';
 
 function renderWithAnswer(status: number, body: unknown) {
-  vi.stubGlobal('fetch', vi.fn(async () => new Response(JSON.stringify(body), { status, headers: { 'content-type': 'application/json' } })));
-  const client = new QueryClient({ defaultOptions: { queries: { retry: false } } });
-  render(
-    <QueryClientProvider client={client}>
-      <HealthStatus />
-    </QueryClientProvider>,
-  );
+  stubFetch(always(() => json(status, body)));
+  renderWithClient(<HealthStatus />);
 }
 
 afterEach(() => {

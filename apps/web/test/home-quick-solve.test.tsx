@@ -3,7 +3,8 @@ import { cleanup, fireEvent, screen, waitFor, within } from '@testing-library/re
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { HomePage } from '../src/routes/HomePage';
 import { parseQuickInput } from '../src/components/run/spec-text';
-import { ME_RESEARCHER, ME_VISITOR, RUN_ID, json, on, renderRoutes, runSummary, runView, stubFetch } from './run-fixtures';
+import { RUN_ID, runSummary, runView } from './run-fixtures';
+import { ME_RESEARCHER, ME_VISITOR, json, on, renderRoutes, stubFetch } from './support/render-page';
 
 afterEach(() => {
   cleanup();

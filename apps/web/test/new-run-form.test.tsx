@@ -2,7 +2,8 @@ import type { UploadResult } from '@cairn/schema';
 import { cleanup, fireEvent, screen, waitFor } from '@testing-library/react';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { NewRunPage } from '../src/pages/NewRunPage';
-import { ME_RESEARCHER, ME_VISITOR, RUN_ID, json, on, renderRoutes, runView, stubFetch, type Route, type SentRequest } from './run-fixtures';
+import { RUN_ID, runView } from './run-fixtures';
+import { ME_RESEARCHER, ME_VISITOR, json, on, renderRoutes, stubFetch, type Route, type SentRequest } from './support/render-page';
 
 afterEach(() => {
   cleanup();

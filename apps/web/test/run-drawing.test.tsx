@@ -2,7 +2,8 @@ import { cleanup, screen } from '@testing-library/react';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { familyGraph, parseGraphFile, placeVertices } from '../src/components/node-link/graph-data';
 import { RunDrawing } from '../src/components/run/RunDrawing';
-import { GRID_RESULT, renderWithClient, runView, stubFetch, on } from './run-fixtures';
+import { GRID_RESULT, runView } from './run-fixtures';
+import { on, renderWithClient, stubFetch } from './support/render-page';
 
 afterEach(() => {
   cleanup();

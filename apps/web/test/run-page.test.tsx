@@ -4,7 +4,8 @@ import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { RunPage } from '../src/pages/RunPage';
 import { SharedRunPage } from '../src/pages/SharedRunPage';
 import { provenanceWords } from '../src/components/run/words';
-import { GRID_RESULT, ME_RESEARCHER, ME_VISITOR, RUN_ID, json, on, renderRoutes, runView, stubFetch, type Route } from './run-fixtures';
+import { GRID_RESULT, RUN_ID, runView } from './run-fixtures';
+import { ME_RESEARCHER, ME_VISITOR, json, on, renderRoutes, stubFetch, type Route } from './support/render-page';
 
 /** Stands in for the browser's EventSource: the test sends the server's events by hand. */
 class FakeEventSource {

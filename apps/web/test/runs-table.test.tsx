@@ -2,14 +2,13 @@ import type { MeResponse, RunList } from '@cairn/schema';
 import { cleanup, fireEvent, screen, waitFor, within } from '@testing-library/react';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { RunsPage } from '../src/pages/RunsPage';
-import { ME_RESEARCHER, ME_VISITOR, json, on, renderRoutes, runSummary, stubFetch } from './run-fixtures';
+import { runSummary } from './run-fixtures';
+import { ME_RESEARCHER, ME_VISITOR, json, on, renderRoutes, stubFetch, uuid } from './support/render-page';
 
 afterEach(() => {
   cleanup();
   vi.unstubAllGlobals();
 });
-
-const uuid = (i: number) => `00000000-0000-4000-8000-${String(i).padStart(12, '0')}`;
 
 // Two pages: runs 1-3 then 4-5, newest first; the server's cursor after run 3 is "after-3". The values are
 // invented for the table (path:100's 7 is ceil(log2 101), Bodlaender et al., "Rankings of graphs", 1998).

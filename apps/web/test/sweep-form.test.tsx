@@ -1,50 +1,26 @@
-import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
-import { cleanup, fireEvent, render, screen, waitFor } from '@testing-library/react';
-import { createMemoryRouter, RouterProvider, useParams } from 'react-router';
+import { cleanup, fireEvent, screen, waitFor } from '@testing-library/react';
+import { useParams } from 'react-router';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { SweepForm } from '../src/components/sweep/SweepForm';
+import { always, json, renderRoutes, stubFetch } from './support/render-page';
 
 const SWEEP_ID = '5b0c1d2e-3f40-4a51-8b62-7c8d9e0f1a2b';
 
-interface Call {
-  method: string;
-  path: string;
-  body: unknown;
-}
-
-/** Stubs fetch: POST /api/v1/sweeps answers `answer` (status, body); every call is recorded. */
-function stubPost(status: number, answer: unknown): Call[] {
-  const calls: Call[] = [];
-  vi.stubGlobal(
-    'fetch',
-    vi.fn(async (input: RequestInfo | URL, init?: RequestInit) => {
-      const url = new URL(String(input), 'http://cairn.test');
-      calls.push({ method: init?.method ?? 'GET', path: url.pathname, body: init?.body ? JSON.parse(String(init.body)) : undefined });
-      return new Response(JSON.stringify(answer), { status, headers: { 'content-type': 'application/json' } });
-    }),
-  );
-  return calls;
-}
+/** Stubs fetch: every request (the form sends only POST /api/v1/sweeps) answers `answer` (status, body); every call is recorded. */
+const stubPost = (status: number, answer: unknown) => stubFetch(always(() => json(status, answer)));
 
 function SweepLanding() {
   return <p>opened sweep {useParams().id}</p>;
 }
 
 function renderForm() {
-  const router = createMemoryRouter(
+  return renderRoutes(
     [
       { path: '/sweeps', element: <SweepForm /> },
       { path: '/sweeps/:id', element: <SweepLanding /> },
     ],
-    { initialEntries: ['/sweeps'] },
-  );
-  const client = new QueryClient({ defaultOptions: { queries: { retry: false }, mutations: { retry: false } } });
-  render(
-    <QueryClientProvider client={client}>
-      <RouterProvider router={router} />
-    </QueryClientProvider>,
-  );
-  return router;
+    '/sweeps',
+  ).router;
 }
 
 const setNumber = (label: string, value: string) => fireEvent.change(screen.getByLabelText(label), { target: { value } });
@@ -112,7 +88,7 @@ describe('SweepForm', () => {
     expect(await screen.findByText(`opened sweep ${SWEEP_ID}`)).toBeTruthy();
     expect(router.state.location.pathname).toBe(`/sweeps/${SWEEP_ID}`);
     const post = calls.find((c) => c.method === 'POST')!;
-    expect(post.path).toBe('/api/v1/sweeps');
+    expect(post.url).toBe('/api/v1/sweeps');
     // The empty name is left out rather than sent as "" (which the schema refuses).
     expect(post.body).toEqual({ family: 'torus', rows: { from: 3, to: 5 }, cols: { from: 3, to: 9 }, method: 'exact', timeLimitSeconds: 120, visibility: 'public' });
   });

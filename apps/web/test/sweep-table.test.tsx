@@ -1,14 +1,12 @@
 import type { SweepCell, SweepView } from '@cairn/schema';
-import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
-import { cleanup, render, screen, waitFor, within } from '@testing-library/react';
-import { createMemoryRouter, MemoryRouter, RouterProvider } from 'react-router';
+import { cleanup, screen, waitFor, within } from '@testing-library/react';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { sweepChartData } from '../src/components/sweep/chart-data';
 import { SweepTable } from '../src/components/sweep/SweepTable';
 import { SweepPage } from '../src/pages/SweepPage';
+import { always, json, renderRoutes, renderWithRouter, stubFetch, uuid as run } from './support/render-page';
 
 const SWEEP_ID = '5b0c1d2e-3f40-4a51-8b62-7c8d9e0f1a2b';
-const run = (n: number) => `00000000-0000-4000-8000-${String(n).padStart(12, '0')}`;
 
 const cell = (rows: number, cols: number, over: Partial<SweepCell>): SweepCell => ({
   rows,
@@ -52,6 +50,8 @@ const summary = (counts: Partial<SweepView['sweep']['counts']>): SweepView['swee
 
 const view: SweepView = { sweep: summary({ done: 3, running: 1, queued: 1 }), cells };
 
+const renderSweep = () => renderRoutes([{ path: '/sweeps/:id', element: <SweepPage /> }], `/sweeps/${SWEEP_ID}`);
+
 afterEach(() => {
   cleanup();
   vi.unstubAllGlobals();
@@ -59,11 +59,7 @@ afterEach(() => {
 
 describe('SweepTable', () => {
   it('lays the cells out rows by columns with values, intervals and states', () => {
-    render(
-      <MemoryRouter>
-        <SweepTable view={view} />
-      </MemoryRouter>,
-    );
+    renderWithRouter(<SweepTable view={view} />);
     const table = screen.getByTestId('sweep-table');
     const bodyRows = within(table).getAllByRole('row').slice(1);
     expect(bodyRows.map((r) => within(r).getByRole('rowheader').textContent)).toEqual(['2', '3']);
@@ -77,11 +73,7 @@ describe('SweepTable', () => {
   });
 
   it('marks mirror cells and links every cell with a run to it', () => {
-    render(
-      <MemoryRouter>
-        <SweepTable view={view} />
-      </MemoryRouter>,
-    );
+    renderWithRouter(<SweepTable view={view} />);
     const mirror = screen.getByTestId('sweep-cell-3x2');
     expect(mirror.getAttribute('data-mirror')).toBe('2x3');
     expect(mirror.textContent).toContain('⇄');
@@ -114,21 +106,14 @@ describe('SweepPage', () => {
       cells: cells.map((c) => (c.status === 'done' ? c : { ...c, status: 'done', rankNumber: 4, lower: 4, upper: 4, provenance: 'exact-search' })),
     };
     let gets = 0;
-    vi.stubGlobal(
-      'fetch',
-      vi.fn(async (input: RequestInfo | URL) => {
-        const path = new URL(String(input), 'http://cairn.test').pathname;
-        if (path !== `/api/v1/sweeps/${SWEEP_ID}`) return new Response('{}', { status: 404 });
+    stubFetch(
+      always((url) => {
+        if (url.pathname !== `/api/v1/sweeps/${SWEEP_ID}`) return json(404, {});
         gets++;
-        return new Response(JSON.stringify(gets === 1 ? view : done), { status: 200, headers: { 'content-type': 'application/json' } });
+        return json(200, gets === 1 ? view : done);
       }),
     );
-    const router = createMemoryRouter([{ path: '/sweeps/:id', element: <SweepPage /> }], { initialEntries: [`/sweeps/${SWEEP_ID}`] });
-    render(
-      <QueryClientProvider client={new QueryClient({ defaultOptions: { queries: { retry: false } } })}>
-        <RouterProvider router={router} />
-      </QueryClientProvider>,
-    );
+    renderSweep();
     expect(await screen.findByText('Seminar grid table')).toBeTruthy();
     expect(screen.getByTestId('sweep-cell-3x4').textContent).toBe('queued');
     expect(screen.getByRole('link', { name: 'Download CSV' }).getAttribute('href')).toBe(`/api/v1/sweeps/${SWEEP_ID}/export?format=csv`);
@@ -140,13 +125,8 @@ describe('SweepPage', () => {
   }, 10_000);
 
   it("shows the server's message when the sweep cannot be read", async () => {
-    vi.stubGlobal('fetch', vi.fn(async () => new Response(JSON.stringify({ error: { code: 'not_found', message: 'no sweep 5b0c1d2e' } }), { status: 404 })));
-    const router = createMemoryRouter([{ path: '/sweeps/:id', element: <SweepPage /> }], { initialEntries: [`/sweeps/${SWEEP_ID}`] });
-    render(
-      <QueryClientProvider client={new QueryClient({ defaultOptions: { queries: { retry: false } } })}>
-        <RouterProvider router={router} />
-      </QueryClientProvider>,
-    );
+    stubFetch(always(() => json(404, { error: { code: 'not_found', message: 'no sweep 5b0c1d2e' } })));
+    renderSweep();
     expect((await screen.findByRole('alert')).textContent).toBe('Could not load this sweep: no sweep 5b0c1d2e');
   });
 });

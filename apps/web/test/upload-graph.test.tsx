@@ -3,7 +3,7 @@ import { cleanup, fireEvent, screen, waitFor } from '@testing-library/react';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { setCsrfToken } from '../src/api/csrf';
 import { GraphUpload } from '../src/components/upload/GraphUpload';
-import { json, on, renderWithClient, stubFetch } from './run-fixtures';
+import { json, on, renderWithClient, stubFetch } from './support/render-page';
 
 afterEach(() => {
   cleanup();

@@ -1,51 +1,21 @@
-import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
-import { cleanup, fireEvent, render, screen, waitFor, within } from '@testing-library/react';
-import { MemoryRouter } from 'react-router';
+import type { MeResponse } from '@cairn/schema';
+import { cleanup, fireEvent, screen, waitFor } from '@testing-library/react';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { parseLabelCsv, parseLabelText } from '../src/components/verify/parse-labels';
 import { VerifyPage } from '../src/pages/VerifyPage';
-
-const me = {
-  user: { id: '00000000-0000-4000-8000-000000000001', login: 'ada', displayName: 'Ada', email: null, role: 'researcher', notifyOnFinish: false },
-  via: 'session',
-  permissions: ['runs:read', 'runs:write', 'atlas:read'],
-  csrfToken: 'csrf-1',
-  signIn: { provider: 'local' },
-};
-
-interface Call {
-  method: string;
-  path: string;
-  body: unknown;
-}
+import { json, ME_RESEARCHER as me, on, renderRoutes, stubFetch } from './support/render-page';
 
 /** /api/v1/me and /api/v1/graphs answer as a researcher with no uploads; POST /api/v1/verify answers `verdict`. */
-function stubApi(verdict: { status: number; body: unknown }, user = me): Call[] {
-  const calls: Call[] = [];
-  vi.stubGlobal(
-    'fetch',
-    vi.fn(async (input: RequestInfo | URL, init?: RequestInit) => {
-      const url = new URL(String(input), 'http://cairn.test');
-      const method = init?.method ?? 'GET';
-      calls.push({ method, path: url.pathname, body: init?.body ? JSON.parse(String(init.body)) : undefined });
-      const reply = (status: number, body: unknown) => new Response(JSON.stringify(body), { status, headers: { 'content-type': 'application/json' } });
-      if (url.pathname === '/api/v1/me') return reply(200, user);
-      if (url.pathname === '/api/v1/graphs') return reply(200, { items: [], total: 0, limit: 100, offset: 0 });
-      if (url.pathname === '/api/v1/verify' && method === 'POST') return reply(verdict.status, verdict.body);
-      return reply(404, { error: { code: 'not_found', message: 'no route' } });
-    }),
+function stubApi(verdict: { status: number; body: unknown }, user: MeResponse = me) {
+  return stubFetch(
+    on('GET', '/api/v1/me', () => json(200, user)),
+    on('GET', '/api/v1/graphs', () => json(200, { items: [], total: 0, limit: 100, offset: 0 })),
+    on('POST', '/api/v1/verify', () => json(verdict.status, verdict.body)),
   );
-  return calls;
 }
 
 async function renderPage() {
-  render(
-    <QueryClientProvider client={new QueryClient({ defaultOptions: { queries: { retry: false }, mutations: { retry: false } } })}>
-      <MemoryRouter initialEntries={['/verify']}>
-        <VerifyPage />
-      </MemoryRouter>
-    </QueryClientProvider>,
-  );
+  renderRoutes([{ path: '/verify', element: <VerifyPage /> }], '/verify');
   // The form appears once the session is known.
   await screen.findByText(/Verify a labelling|Your role does not allow/);
 }
@@ -73,7 +43,7 @@ describe('VerifyPage', () => {
     submit();
     const summary = await screen.findByTestId('violation-summary');
     const post = calls.find((c) => c.method === 'POST')!;
-    expect(post.path).toBe('/api/v1/verify');
+    expect(post.url).toBe('/api/v1/verify');
     expect(post.body).toEqual({ spec: 'grid:2x3', labels: [1, 2, 1, 2, 1, 2] });
     expect(summary.textContent).toContain('row 1, column 2 and row 2, column 1 both have label 2');
     const picture = screen.getByTestId('ranking-picture');
@@ -131,7 +101,7 @@ describe('VerifyPage', () => {
   });
 
   it('tells a viewer the page needs a researcher', async () => {
-    stubApi({ status: 200, body: {} }, { ...me, user: { ...me.user, role: 'viewer' }, permissions: ['runs:read', 'atlas:read'] });
+    stubApi({ status: 200, body: {} }, { ...me, user: { ...me.user!, role: 'viewer' }, permissions: ['runs:read', 'atlas:read'] });
     await renderPage();
     expect(await screen.findByText(/Your role does not allow verifying labellings/)).toBeTruthy();
     await waitFor(() => expect(screen.queryByLabelText('Labels')).toBeNull());

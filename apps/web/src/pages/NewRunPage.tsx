@@ -6,7 +6,8 @@ import { useNavigate } from 'react-router';
 import { ApiRequestError, fieldProblems } from '../api/client';
 import { signInHref, useCan, useMe } from '../api/me';
 import { useCreateRun } from '../api/runs';
-import { ErrorNote, FieldError, Loading, buttonClass, inputClass } from '../components/run/bits';
+import { Field, FieldError, invalidProps } from '../components/form/Field';
+import { ErrorNote, Loading, buttonClass, inputClass } from '../components/run/bits';
 import { FAMILY_FORM, FORM_FAMILIES, NEW_RUN_DEFAULTS, NewRunSchema, fieldOfServerProblem, requestBodyOf, type FormField, type NewRunValues } from '../components/run/new-run-form';
 import { METHOD_WORDS } from '../components/run/words';
 import { MaskEditor } from '../components/mask-editor/MaskEditor';
@@ -45,6 +46,8 @@ export function NewRunPage() {
 
 /** The message of a field, or of the spec as a whole for the size fields. */
 const messageOf = (errors: FieldErrors<NewRunValues>, field: FormField) => errors[field]?.message;
+/** This form's labels sit right on their controls, with no gap below. */
+const LABEL_CLASS = 'block text-sm font-medium';
 
 export function NewRunForm() {
   const navigate = useNavigate();
@@ -82,22 +85,17 @@ export function NewRunForm() {
   const numberField = (field: FormField, label: string, step?: string) => {
     const message = messageOf(errors, field);
     return (
-      <div key={field} className="w-36">
-        <label htmlFor={fid(field)} className="block text-sm font-medium">
-          {label}
-        </label>
+      <Field key={field} id={fid(field)} label={label} error={message} className="w-36" labelClassName={LABEL_CLASS}>
         <input
           id={fid(field)}
           type="number"
           inputMode={step ? 'decimal' : 'numeric'}
           step={step ?? 1}
           className={inputClass}
-          aria-invalid={message ? true : undefined}
-          aria-describedby={message ? fid(`${field}-error`) : undefined}
+          {...invalidProps(fid(field), message)}
           {...register(field, { valueAsNumber: true })}
         />
-        <FieldError id={fid(`${field}-error`)} message={message} />
-      </div>
+      </Field>
     );
   };
 
@@ -110,10 +108,7 @@ export function NewRunForm() {
       <form onSubmit={handleSubmit(onSubmit)} noValidate className="space-y-6" aria-label="New run">
         <fieldset className="space-y-4 rounded-lg border border-stone-200 p-4">
           <legend className="px-1 font-display text-lg font-semibold">Graph</legend>
-          <div className="max-w-sm">
-            <label htmlFor={fid('family')} className="block text-sm font-medium">
-              Family
-            </label>
+          <Field id={fid('family')} label="Family" error={messageOf(errors, 'family')} className="max-w-sm" labelClassName={LABEL_CLASS}>
             <select id={fid('family')} className={inputClass} {...register('family')} aria-describedby={fid('family-explain')}>
               {FORM_FAMILIES.map((f) => (
                 <option key={f} value={f}>
@@ -124,8 +119,7 @@ export function NewRunForm() {
             <p id={fid('family-explain')} className="mt-1 text-sm text-lichen-700">
               {described.explain}
             </p>
-            <FieldError id={fid('family-error')} message={messageOf(errors, 'family')} />
-          </div>
+          </Field>
           {described.sizes.length > 0 && <div className="flex flex-wrap gap-3">{described.sizes.map((s) => numberField(s.field, s.label, s.step))}</div>}
           {family === 'mask' && (
             <Controller
@@ -171,10 +165,7 @@ export function NewRunForm() {
 
         <fieldset className="flex flex-wrap gap-4 rounded-lg border border-stone-200 p-4">
           <legend className="px-1 font-display text-lg font-semibold">Limits and who sees it</legend>
-          <div className="w-48">
-            <label htmlFor={fid('timeLimitSeconds')} className="block text-sm font-medium">
-              Time limit (seconds)
-            </label>
+          <Field id={fid('timeLimitSeconds')} label="Time limit (seconds)" error={messageOf(errors, 'timeLimitSeconds')} className="w-48" labelClassName={LABEL_CLASS}>
             <input
               id={fid('timeLimitSeconds')}
               type="number"
@@ -187,12 +178,8 @@ export function NewRunForm() {
             <p id={fid('time-hint')} className="mt-1 text-xs text-lichen-700">
               1 to 3600. When it runs out you keep the best proven interval.
             </p>
-            <FieldError id={fid('timeLimitSeconds-error')} message={messageOf(errors, 'timeLimitSeconds')} />
-          </div>
-          <div className="w-72">
-            <label htmlFor={fid('visibility')} className="block text-sm font-medium">
-              Who sees it
-            </label>
+          </Field>
+          <Field id={fid('visibility')} label="Who sees it" error={messageOf(errors, 'visibility')} className="w-72" labelClassName={LABEL_CLASS}>
             <select id={fid('visibility')} className={inputClass} {...register('visibility')}>
               {Visibility.options.map((v) => (
                 <option key={v} value={v}>
@@ -200,8 +187,7 @@ export function NewRunForm() {
                 </option>
               ))}
             </select>
-            <FieldError id={fid('visibility-error')} message={messageOf(errors, 'visibility')} />
-          </div>
+          </Field>
         </fieldset>
 
         {errors.root?.server?.message && <ErrorNote error={new Error(errors.root.server.message)} what="The run was not started" />}

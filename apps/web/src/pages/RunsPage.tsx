@@ -5,6 +5,7 @@ import { signInHref, useCan, useMe } from '../api/me';
 import { useRunList } from '../api/runs';
 import { ErrorNote, Loading, inputClass, linkClass, quietButtonClass } from '../components/run/bits';
 import { RunsTable } from '../components/run/RunsTable';
+import { PagerNav } from '../components/table/Pager';
 
 /** The families runs are filed under (the spec's family; uploads as `upload`). */
 const FAMILIES = ['grid', 'cylinder', 'torus', 'staircase', 'path', 'cycle', 'complete', 'bipartite', 'star', 'random-tree', 'gnp', 'mask', 'tree', 'upload'] as const;
@@ -146,15 +147,17 @@ export function RunsList() {
       {runs.length > 0 && <RunsTable runs={runs} showOwner={isAdmin || owner === undefined} />}
 
       {(cursors.length > 1 || nextCursor) && (
-        <nav className="flex items-center gap-3 text-sm" aria-label="Pages of runs">
-          <button type="button" className={quietButtonClass} disabled={cursors.length <= 1 || list.isFetching} onClick={() => setCursors((s) => s.slice(0, -1))}>
-            Previous
-          </button>
+        <PagerNav
+          label="Pages of runs"
+          className="flex items-center gap-3 text-sm"
+          buttonClassName={quietButtonClass}
+          canPrevious={cursors.length > 1 && !list.isFetching}
+          canNext={!!nextCursor && !list.isFetching}
+          onPrevious={() => setCursors((s) => s.slice(0, -1))}
+          onNext={() => nextCursor && setCursors((s) => [...s, nextCursor])}
+        >
           <span>page {cursors.length}</span>
-          <button type="button" className={quietButtonClass} disabled={!nextCursor || list.isFetching} onClick={() => nextCursor && setCursors((s) => [...s, nextCursor])}>
-            Next
-          </button>
-        </nav>
+        </PagerNav>
       )}
     </section>
   );

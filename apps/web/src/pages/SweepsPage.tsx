@@ -4,7 +4,8 @@ import { useMe } from '../api/me';
 import { SWEEP_PAGE_SIZE, useSweeps } from '../api/sweeps';
 import { SweepForm } from '../components/sweep/SweepForm';
 import { SweepProgress } from '../components/sweep/SweepProgress';
-import { EmptyNote, ErrorNote, formatWhen, LoadingNote, PermissionNote, quietButtonClass } from '../components/sweep/states';
+import { EmptyNote, ErrorNote, formatWhen, LoadingNote, PermissionNote } from '../components/sweep/states';
+import { PagerNav } from '../components/table/Pager';
 
 /** /sweeps: the member's sweeps (and those shared with them), and a form to start one. */
 export function SweepsPage() {
@@ -28,6 +29,8 @@ export function SweepsPage() {
   );
 }
 
+const SWEEP_COLUMNS = ['Name', 'Sizes', 'Progress', 'Method', 'Owner', 'Started'];
+
 function SweepList() {
   const [offset, setOffset] = useState(0);
   const list = useSweeps(offset);
@@ -44,24 +47,11 @@ function SweepList() {
         <table className="w-full min-w-[40rem] text-left text-sm" data-testid="sweep-list">
           <thead className="bg-stone-100 text-xs uppercase tracking-wide text-lichen-700">
             <tr>
-              <th scope="col" className="px-3 py-2">
-                Name
-              </th>
-              <th scope="col" className="px-3 py-2">
-                Sizes
-              </th>
-              <th scope="col" className="px-3 py-2">
-                Progress
-              </th>
-              <th scope="col" className="px-3 py-2">
-                Method
-              </th>
-              <th scope="col" className="px-3 py-2">
-                Owner
-              </th>
-              <th scope="col" className="px-3 py-2">
-                Started
-              </th>
+              {SWEEP_COLUMNS.map((name) => (
+                <th key={name} scope="col" className="px-3 py-2">
+                  {name}
+                </th>
+              ))}
             </tr>
           </thead>
           <tbody>
@@ -90,22 +80,19 @@ function SweepList() {
           </tbody>
         </table>
       </div>
-      <nav className="flex items-center gap-3" aria-label="Sweep pages">
-        <button type="button" className={quietButtonClass} disabled={offset === 0 || list.isFetching} onClick={() => setOffset(Math.max(0, offset - SWEEP_PAGE_SIZE))}>
-          Newer
-        </button>
+      <PagerNav
+        label="Sweep pages"
+        previousText="Newer"
+        nextText="Older"
+        canPrevious={offset > 0 && !list.isFetching}
+        canNext={list.data?.nextOffset != null && !list.isFetching}
+        onPrevious={() => setOffset(Math.max(0, offset - SWEEP_PAGE_SIZE))}
+        onNext={() => list.data?.nextOffset != null && setOffset(list.data.nextOffset)}
+      >
         <span className="text-sm text-lichen-700">
           {offset + 1}–{offset + sweeps.length}
         </span>
-        <button
-          type="button"
-          className={quietButtonClass}
-          disabled={list.data?.nextOffset === null || list.data?.nextOffset === undefined || list.isFetching}
-          onClick={() => list.data?.nextOffset != null && setOffset(list.data.nextOffset)}
-        >
-          Older
-        </button>
-      </nav>
+      </PagerNav>
     </section>
   );
 }

@@ -5,7 +5,8 @@ import { useQuickAnswer, useRecentAtlas } from '../api/quick';
 import { useCreateRun, useRunList } from '../api/runs';
 import { signInHref, useCan, useMe } from '../api/me';
 import { HealthStatus } from '../components/HealthStatus';
-import { ErrorNote, FieldError, Loading, StatusBadge, buttonClass, inputClass, linkClass, quietButtonClass } from '../components/run/bits';
+import { FieldError } from '../components/form/Field';
+import { ErrorNote, Loading, StatusBadge, buttonClass, inputClass, linkClass, quietButtonClass } from '../components/run/bits';
 import { parseQuickInput, type TextFamily } from '../components/run/spec-text';
 import { provenanceTag, valueText } from '../components/run/words';
 

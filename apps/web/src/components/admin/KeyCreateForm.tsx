@@ -5,7 +5,8 @@ import { useForm, type FieldPath } from 'react-hook-form';
 import { z } from 'zod';
 import { useCreateKey, useMembers } from '../../api/admin';
 import { fieldProblems } from '../../api/client';
-import { buttonClass, ErrorNote, FieldError, formFieldOf, inputClass, quietButtonClass } from '../sweep/states';
+import { Field, FieldError, FormSubmit, invalidProps } from '../form/Field';
+import { buttonClass, ErrorNote, formFieldOf, inputClass, quietButtonClass } from '../sweep/states';
 
 /** The shared request with sentences for an empty member or name (the schema's own words are terse there). */
 const KeyFormSchema = ApiKeyCreateRequest.extend({
@@ -52,21 +53,11 @@ export function KeyCreateForm() {
           New API key
         </h3>
         <div className="grid gap-4 sm:grid-cols-2">
-          <div>
-            <label htmlFor="key-userId" className="mb-1 block text-sm font-medium">
-              Acts for
-            </label>
+          <Field id="key-userId" label="Acts for" error={errors.userId?.message}>
             {members.isError ? (
               <ErrorNote error={members.error} what="list the members" />
             ) : (
-              <select
-                id="key-userId"
-                className={inputClass}
-                disabled={members.isLoading}
-                {...register('userId')}
-                aria-invalid={errors.userId ? true : undefined}
-                aria-describedby={errors.userId ? 'key-userId-error' : undefined}
-              >
+              <select id="key-userId" className={inputClass} disabled={members.isLoading} {...register('userId')} {...invalidProps('key-userId', errors.userId?.message)}>
                 <option value="">{members.isLoading ? 'Loading members…' : 'Pick a member'}</option>
                 {members.data?.users.map((m) => (
                   <option key={m.id} value={m.id}>
@@ -75,22 +66,10 @@ export function KeyCreateForm() {
                 ))}
               </select>
             )}
-            <FieldError id="key-userId-error" message={errors.userId?.message} />
-          </div>
-          <div>
-            <label htmlFor="key-name" className="mb-1 block text-sm font-medium">
-              Name
-            </label>
-            <input
-              id="key-name"
-              className={inputClass}
-              placeholder="nightly grid tables"
-              {...register('name')}
-              aria-invalid={errors.name ? true : undefined}
-              aria-describedby={errors.name ? 'key-name-error' : undefined}
-            />
-            <FieldError id="key-name-error" message={errors.name?.message} />
-          </div>
+          </Field>
+          <Field id="key-name" label="Name" error={errors.name?.message}>
+            <input id="key-name" className={inputClass} placeholder="nightly grid tables" {...register('name')} {...invalidProps('key-name', errors.name?.message)} />
+          </Field>
         </div>
         <fieldset aria-describedby={errors.scopes ? 'key-scopes-error' : 'key-scopes-help'}>
           <legend className="mb-1 text-sm font-medium">Scopes</legend>
@@ -107,14 +86,9 @@ export function KeyCreateForm() {
           </div>
           <FieldError id="key-scopes-error" message={errors.scopes?.message ?? errors.scopes?.root?.message} />
         </fieldset>
-        {errors.root?.message && (
-          <p role="alert" className="text-sm text-alarm-600">
-            {errors.root.message}
-          </p>
-        )}
-        <button type="submit" className={buttonClass} disabled={isSubmitting}>
-          {isSubmitting ? 'Making the key…' : 'Make key'}
-        </button>
+        <FormSubmit problem={errors.root?.message} pending={isSubmitting} pendingText="Making the key…">
+          Make key
+        </FormSubmit>
       </form>
       {created && <SecretBox created={created} onDone={() => setCreated(null)} />}
     </div>

@@ -1,10 +1,11 @@
 import type { ApiKeyInfo } from '@cairn/schema';
-import { createColumnHelper, flexRender, getCoreRowModel, getFilteredRowModel, getPaginationRowModel, useReactTable } from '@tanstack/react-table';
+import { createColumnHelper, getCoreRowModel, getFilteredRowModel, getPaginationRowModel, useReactTable } from '@tanstack/react-table';
 import { useMemo, useState } from 'react';
 import { useApiKeys, useRevokeKey } from '../../api/admin';
 import { EmptyNote, ErrorNote, formatWhen, LoadingNote, quietButtonClass } from '../sweep/states';
 import { KeyCreateForm } from './KeyCreateForm';
-import { Pager } from './Pager';
+import { DataTable } from '../table/DataTable';
+import { Pager } from '../table/Pager';
 
 const column = createColumnHelper<ApiKeyInfo>();
 
@@ -114,32 +115,13 @@ export function KeysPanel() {
           <label className="inline-flex items-center gap-2 text-sm">
             <input type="checkbox" checked={hideRevoked} onChange={(e) => setHideRevoked(e.target.checked)} /> hide revoked keys
           </label>
-          <div className="overflow-x-auto rounded-md border border-stone-200">
-            <table className="w-full min-w-[48rem] text-left text-sm" data-testid="keys-table">
-              <thead className="bg-stone-100 text-xs uppercase tracking-wide text-lichen-700">
-                {table.getHeaderGroups().map((g) => (
-                  <tr key={g.id}>
-                    {g.headers.map((h) => (
-                      <th key={h.id} scope="col" className="px-3 py-2">
-                        {flexRender(h.column.columnDef.header, h.getContext())}
-                      </th>
-                    ))}
-                  </tr>
-                ))}
-              </thead>
-              <tbody>
-                {table.getRowModel().rows.map((row) => (
-                  <tr key={row.id} className={`border-t border-stone-200 ${row.original.revokedAt ? 'text-lichen-500' : ''}`} data-testid="key-row">
-                    {row.getVisibleCells().map((cell) => (
-                      <td key={cell.id} className="px-3 py-2 align-middle">
-                        {flexRender(cell.column.columnDef.cell, cell.getContext())}
-                      </td>
-                    ))}
-                  </tr>
-                ))}
-              </tbody>
-            </table>
-          </div>
+          <DataTable
+            table={table}
+            testId="keys-table"
+            classes={{ table: 'w-full min-w-[48rem] text-left text-sm' }}
+            rowClass={(row) => (row.original.revokedAt ? 'text-lichen-500' : '')}
+            rowTestId="key-row"
+          />
           <Pager table={table} label="Key pages" />
         </div>
       )}

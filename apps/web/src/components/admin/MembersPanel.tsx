@@ -1,10 +1,11 @@
 import { Role, type MemberRow } from '@cairn/schema';
-import { createColumnHelper, flexRender, getCoreRowModel, getFilteredRowModel, getPaginationRowModel, useReactTable } from '@tanstack/react-table';
+import { createColumnHelper, getCoreRowModel, getFilteredRowModel, getPaginationRowModel, useReactTable } from '@tanstack/react-table';
 import { useMemo, useState } from 'react';
 import { useChangeRole, useMembers } from '../../api/admin';
 import { useMe } from '../../api/me';
 import { EmptyNote, ErrorNote, formatWhen, inputClass, LoadingNote } from '../sweep/states';
-import { Pager } from './Pager';
+import { DataTable } from '../table/DataTable';
+import { Pager } from '../table/Pager';
 
 const ROLE_WORDS: Record<Role, string> = {
   admin: 'admin — also manages members and keys',
@@ -109,33 +110,12 @@ export function MembersPanel() {
           {problem.login}&rsquo;s role stays as it was: {problem.message}
         </p>
       )}
-      <div className="overflow-x-auto rounded-md border border-stone-200">
-        <table className="w-full min-w-[36rem] text-left text-sm" data-testid="members-table">
-          <thead className="bg-stone-100 text-xs uppercase tracking-wide text-lichen-700">
-            {table.getHeaderGroups().map((g) => (
-              <tr key={g.id}>
-                {g.headers.map((h) => (
-                  <th key={h.id} scope="col" className="px-3 py-2">
-                    {flexRender(h.column.columnDef.header, h.getContext())}
-                  </th>
-                ))}
-              </tr>
-            ))}
-          </thead>
-          <tbody>
-            {table.getRowModel().rows.map((row) => (
-              <tr key={row.id} className="border-t border-stone-200">
-                {row.getVisibleCells().map((cell) => (
-                  <td key={cell.id} className="px-3 py-2 align-middle">
-                    {flexRender(cell.column.columnDef.cell, cell.getContext())}
-                  </td>
-                ))}
-              </tr>
-            ))}
-          </tbody>
-        </table>
-      </div>
-      {table.getRowModel().rows.length === 0 && <EmptyNote>No member matches &ldquo;{search}&rdquo;.</EmptyNote>}
+      <DataTable
+        table={table}
+        testId="members-table"
+        classes={{ table: 'w-full min-w-[36rem] text-left text-sm' }}
+        empty={<EmptyNote>No member matches &ldquo;{search}&rdquo;.</EmptyNote>}
+      />
       <Pager table={table} label="Member pages" />
     </section>
   );

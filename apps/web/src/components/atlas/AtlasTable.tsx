@@ -1,12 +1,15 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { AtlasQuery, type AtlasEntryView } from '@cairn/schema';
-import { createColumnHelper, flexRender, getCoreRowModel, useReactTable } from '@tanstack/react-table';
+import { createColumnHelper, getCoreRowModel, useReactTable } from '@tanstack/react-table';
 import { useMemo, useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { Link } from 'react-router';
 import { z } from 'zod';
 import { ATLAS_PAGE_SIZE, useAtlasPage, type AtlasFilters } from '../../api/atlas';
-import { EmptyNote, ErrorNote, FieldError, formatWhen, inputClass, LoadingNote, quietButtonClass, buttonClass } from '../sweep/states';
+import { Field, invalidProps } from '../form/Field';
+import { EmptyNote, ErrorNote, formatWhen, inputClass, LoadingNote, buttonClass } from '../sweep/states';
+import { DataTable } from '../table/DataTable';
+import { Pager } from '../table/Pager';
 import { provenanceWords, valueText } from './entries';
 import { SHADE_CLASS, shadeOf, SHADE_WORDS } from './knowledge';
 
@@ -29,6 +32,18 @@ const runLink = (id: string | null, text: string) =>
       {text}
     </Link>
   ) : null;
+
+/** How one side of the value is known, with a link to the run that showed it. */
+const boundColumn = (side: 'lower' | 'upper', header: string) =>
+  column.display({
+    id: side,
+    header,
+    cell: ({ row }) => (
+      <span className="text-xs">
+        {provenanceWords(row.original[`${side}Provenance`])} {runLink(row.original[`${side}RunId`], 'run')}
+      </span>
+    ),
+  });
 
 const columns = [
   column.accessor('graphKey', { header: 'Graph', cell: (c) => <span className="font-mono">{c.getValue()}</span> }),
@@ -55,24 +70,8 @@ const columns = [
       );
     },
   }),
-  column.display({
-    id: 'lower',
-    header: 'Lower bound from',
-    cell: ({ row }) => (
-      <span className="text-xs">
-        {provenanceWords(row.original.lowerProvenance)} {runLink(row.original.lowerRunId, 'run')}
-      </span>
-    ),
-  }),
-  column.display({
-    id: 'upper',
-    header: 'Upper bound from',
-    cell: ({ row }) => (
-      <span className="text-xs">
-        {provenanceWords(row.original.upperProvenance)} {runLink(row.original.upperRunId, 'run')}
-      </span>
-    ),
-  }),
+  boundColumn('lower', 'Lower bound from'),
+  boundColumn('upper', 'Upper bound from'),
   column.accessor('updatedAt', { header: 'Updated', cell: (c) => <span className="whitespace-nowrap text-xs">{formatWhen(c.getValue())}</span> }),
 ];
 
@@ -91,6 +90,7 @@ export function AtlasTable({ family }: { family: string | undefined }) {
     getCoreRowModel: getCoreRowModel(),
     manualPagination: true,
     pageCount,
+    rowCount: total,
     state: { pagination: { pageIndex, pageSize: ATLAS_PAGE_SIZE } },
     onPaginationChange: (updater) => {
       const next = typeof updater === 'function' ? updater({ pageIndex, pageSize: ATLAS_PAGE_SIZE }) : updater;
@@ -113,50 +113,27 @@ export function AtlasTable({ family }: { family: string | undefined }) {
   return (
     <div className="space-y-4">
       <form onSubmit={handleSubmit(apply)} noValidate className="flex flex-wrap items-start gap-3" aria-label="Atlas filters">
-        <div className="w-28">
-          <label htmlFor="atlas-rows" className="mb-1 block text-sm font-medium">
-            Rows
-          </label>
-          <input
-            id="atlas-rows"
-            type="number"
-            inputMode="numeric"
-            min={1}
-            className={inputClass}
-            placeholder="any"
-            {...register('rows')}
-            aria-invalid={errors.rows ? true : undefined}
-            aria-describedby={errors.rows ? 'atlas-rows-error' : undefined}
-          />
-          <FieldError id="atlas-rows-error" message={errors.rows?.message} />
-        </div>
-        <div className="w-28">
-          <label htmlFor="atlas-cols" className="mb-1 block text-sm font-medium">
-            Columns
-          </label>
-          <input
-            id="atlas-cols"
-            type="number"
-            inputMode="numeric"
-            min={1}
-            className={inputClass}
-            placeholder="any"
-            {...register('cols')}
-            aria-invalid={errors.cols ? true : undefined}
-            aria-describedby={errors.cols ? 'atlas-cols-error' : undefined}
-          />
-          <FieldError id="atlas-cols-error" message={errors.cols?.message} />
-        </div>
-        <div className="w-40">
-          <label htmlFor="atlas-exact" className="mb-1 block text-sm font-medium">
-            Known
-          </label>
+        {(['rows', 'cols'] as const).map((axis) => (
+          <Field key={axis} id={`atlas-${axis}`} label={axis === 'rows' ? 'Rows' : 'Columns'} error={errors[axis]?.message} className="w-28">
+            <input
+              id={`atlas-${axis}`}
+              type="number"
+              inputMode="numeric"
+              min={1}
+              className={inputClass}
+              placeholder="any"
+              {...register(axis)}
+              {...invalidProps(`atlas-${axis}`, errors[axis]?.message)}
+            />
+          </Field>
+        ))}
+        <Field id="atlas-exact" label="Known" className="w-40">
           <select id="atlas-exact" className={inputClass} {...register('exact')}>
             <option value="any">exact or bounded</option>
             <option value="true">exact only</option>
             <option value="false">bounded only</option>
           </select>
-        </div>
+        </Field>
         <button type="submit" className={`${buttonClass} mt-6`}>
           Apply filters
         </button>
@@ -171,43 +148,13 @@ export function AtlasTable({ family }: { family: string | undefined }) {
         <EmptyNote>No entries match. Every finished run adds its graph here; try fewer filters.</EmptyNote>
       ) : (
         <>
-          <div className="overflow-x-auto rounded-md border border-stone-200">
-            <table className="w-full min-w-[44rem] text-left text-sm" data-testid="atlas-table" aria-busy={page.isFetching}>
-              <thead className="bg-stone-100 text-xs uppercase tracking-wide text-lichen-700">
-                {table.getHeaderGroups().map((g) => (
-                  <tr key={g.id}>
-                    {g.headers.map((h) => (
-                      <th key={h.id} scope="col" className="px-3 py-2">
-                        {flexRender(h.column.columnDef.header, h.getContext())}
-                      </th>
-                    ))}
-                  </tr>
-                ))}
-              </thead>
-              <tbody>
-                {table.getRowModel().rows.map((row) => (
-                  <tr key={row.id} className="border-t border-stone-200 align-top">
-                    {row.getVisibleCells().map((cell) => (
-                      <td key={cell.id} className="px-3 py-2">
-                        {flexRender(cell.column.columnDef.cell, cell.getContext())}
-                      </td>
-                    ))}
-                  </tr>
-                ))}
-              </tbody>
-            </table>
-          </div>
-          <nav className="flex flex-wrap items-center gap-3" aria-label="Atlas pages">
-            <button type="button" className={quietButtonClass} onClick={() => table.previousPage()} disabled={!table.getCanPreviousPage() || page.isFetching}>
-              Previous
-            </button>
-            <span className="text-sm text-lichen-700" aria-live="polite">
-              {pageIndex * ATLAS_PAGE_SIZE + 1}–{pageIndex * ATLAS_PAGE_SIZE + (page.data?.entries.length ?? 0)} of {total}
-            </span>
-            <button type="button" className={quietButtonClass} onClick={() => table.nextPage()} disabled={!table.getCanNextPage() || page.isFetching}>
-              Next
-            </button>
-          </nav>
+          <DataTable
+            table={table}
+            testId="atlas-table"
+            busy={page.isFetching}
+            classes={{ table: 'w-full min-w-[44rem] text-left text-sm', row: 'border-t border-stone-200 align-top', cell: 'px-3 py-2' }}
+          />
+          <Pager table={table} label="Atlas pages" busy={page.isFetching} always className="flex flex-wrap items-center gap-3" />
         </>
       )}
     </div>

@@ -1,5 +1,6 @@
 import { useEffect, useId, useMemo, useRef, useState, type KeyboardEvent, type PointerEvent } from 'react';
-import { FieldError, inputClass, quietButtonClass } from '../run/bits';
+import { FieldError } from '../form/Field';
+import { inputClass, quietButtonClass } from '../run/bits';
 import { EDITOR_MAX_SIDE, cellCount, formatMaskText, fullMask, parseMaskText, resizeMask, type MaskModel } from './mask-text';
 
 export interface MaskEditorProps {

@@ -106,6 +106,8 @@ function SvgCells({ layout, labels, labelCount, onHover, hovered, hoveredLabel, 
             tabIndex={showText ? 0 : -1}
             data-vertex={v}
             data-label={label}
+            data-above={above.has(v) ? '' : undefined}
+            data-marked={marked?.has(v) ? '' : undefined}
             aria-label={`row ${r + 1}, column ${c + 1}: label ${label}`}
           >
             <rect

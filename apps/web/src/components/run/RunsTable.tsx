@@ -1,7 +1,8 @@
 import type { RunSummary } from '@cairn/schema';
-import { createColumnHelper, flexRender, getCoreRowModel, getSortedRowModel, useReactTable, type SortingState } from '@tanstack/react-table';
+import { createColumnHelper, getCoreRowModel, getSortedRowModel, useReactTable, type SortingState } from '@tanstack/react-table';
 import { useMemo, useState } from 'react';
 import { Link } from 'react-router';
+import { DataTable } from '../table/DataTable';
 import { StatusBadge, linkClass } from './bits';
 import { formatDuration, formatWhen, METHOD_WORDS, provenanceTag, runDurationMs, valueText } from './words';
 
@@ -69,38 +70,20 @@ export function RunsTable({ runs, showOwner }: { runs: RunSummary[]; showOwner: 
     getRowId: (r) => r.id,
   });
   return (
-    <div className="overflow-x-auto rounded-lg ring-1 ring-stone-200">
-      <table className="min-w-full text-left text-sm" data-testid="runs-table">
-        <caption className="sr-only">Runs, newest first; the column headers sort this page</caption>
-        <thead className="bg-stone-100 text-xs uppercase tracking-wide text-lichen-700">
-          {table.getHeaderGroups().map((hg) => (
-            <tr key={hg.id}>
-              {hg.headers.map((h) => {
-                const sorted = h.column.getIsSorted();
-                return (
-                  <th key={h.id} scope="col" className="px-3 py-2 font-medium" aria-sort={sorted === 'asc' ? 'ascending' : sorted === 'desc' ? 'descending' : 'none'}>
-                    <button type="button" className="inline-flex items-center gap-1 uppercase hover:text-slate-ink" onClick={h.column.getToggleSortingHandler()}>
-                      {flexRender(h.column.columnDef.header, h.getContext())}
-                      <span aria-hidden="true">{sorted === 'asc' ? '▲' : sorted === 'desc' ? '▼' : ''}</span>
-                    </button>
-                  </th>
-                );
-              })}
-            </tr>
-          ))}
-        </thead>
-        <tbody className="divide-y divide-stone-100">
-          {table.getRowModel().rows.map((row) => (
-            <tr key={row.id} className="hover:bg-stone-100/60" data-testid="run-row">
-              {row.getVisibleCells().map((cell) => (
-                <td key={cell.id} className="px-3 py-2 align-top">
-                  {flexRender(cell.column.columnDef.cell, cell.getContext())}
-                </td>
-              ))}
-            </tr>
-          ))}
-        </tbody>
-      </table>
-    </div>
+    <DataTable
+      table={table}
+      testId="runs-table"
+      caption="Runs, newest first; the column headers sort this page"
+      sortable
+      classes={{
+        wrapper: 'overflow-x-auto rounded-lg ring-1 ring-stone-200',
+        table: 'min-w-full text-left text-sm',
+        headerCell: 'px-3 py-2 font-medium',
+        body: 'divide-y divide-stone-100',
+        row: 'hover:bg-stone-100/60',
+        cell: 'px-3 py-2 align-top',
+      }}
+      rowTestId="run-row"
+    />
   );
 }

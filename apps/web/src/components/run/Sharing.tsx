@@ -4,7 +4,8 @@ import { useId, useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { fieldProblems } from '../../api/client';
 import { useRunVisibility, useShareRun } from '../../api/runs';
-import { ErrorNote, FieldError, buttonClass, inputClass, quietButtonClass } from './bits';
+import { FieldError } from '../form/Field';
+import { ErrorNote, buttonClass, inputClass, quietButtonClass } from './bits';
 
 const VISIBILITY_WORDS: Record<Visibility, string> = {
   private: 'Private: you and the admins',
@@ -95,7 +96,8 @@ export function ShareBox({ run }: { run: RunView }) {
       setError('email', { type: 'server', message: problems.find((p) => p.field === 'body.email')?.message ?? (err instanceof Error ? err.message : String(err)) });
     }
   };
-  const link = share.data?.url ?? run.links.shared;
+  // The run's own link decides: once it is private again the link is gone, even one mailed a moment ago.
+  const link = run.links.shared === null ? null : (share.data?.url ?? run.links.shared);
   return (
     <div className="space-y-3">
       <form onSubmit={handleSubmit(onSubmit)} noValidate className="space-y-1" aria-label="Share by mail">

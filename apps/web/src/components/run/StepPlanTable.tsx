@@ -1,6 +1,8 @@
 import type { RunPlan } from '@cairn/schema';
-import { createColumnHelper, flexRender, getCoreRowModel, getPaginationRowModel, useReactTable } from '@tanstack/react-table';
+import { createColumnHelper, getCoreRowModel, getPaginationRowModel, useReactTable } from '@tanstack/react-table';
 import { useMemo } from 'react';
+import { DataTable } from '../table/DataTable';
+import { Pager } from '../table/Pager';
 import { quietButtonClass } from './bits';
 
 type Step = RunPlan['steps'][number];
@@ -54,49 +56,35 @@ export function StepPlanTable({ steps, nameOf = String, pageSize = 20 }: { steps
     initialState: { pagination: { pageIndex: 0, pageSize } },
   });
   if (steps.length === 0) return <p className="text-sm text-lichen-700">The plan has no steps.</p>;
-  const { pageIndex } = table.getState().pagination;
   return (
     <div className="space-y-2">
-      <div className="overflow-x-auto">
-        <table className="min-w-full text-left text-sm" data-testid="step-plan">
-          <caption className="sr-only">Step plan: the vertices each step handles in parallel</caption>
-          <thead className="border-b border-stone-200 text-xs uppercase tracking-wide text-lichen-700">
-            {table.getHeaderGroups().map((hg) => (
-              <tr key={hg.id}>
-                {hg.headers.map((h) => (
-                  <th key={h.id} scope="col" className="px-2 py-1.5 font-medium">
-                    {flexRender(h.column.columnDef.header, h.getContext())}
-                  </th>
-                ))}
-              </tr>
-            ))}
-          </thead>
-          <tbody className="divide-y divide-stone-100">
-            {table.getRowModel().rows.map((row) => (
-              <tr key={row.id}>
-                {row.getVisibleCells().map((cell) => (
-                  <td key={cell.id} className="px-2 py-1.5 align-top">
-                    {flexRender(cell.column.columnDef.cell, cell.getContext())}
-                  </td>
-                ))}
-              </tr>
-            ))}
-          </tbody>
-        </table>
-      </div>
-      {table.getPageCount() > 1 && (
-        <nav className="flex items-center gap-2 text-sm" aria-label="Step plan pages">
-          <button type="button" className={quietButtonClass} onClick={() => table.previousPage()} disabled={!table.getCanPreviousPage()}>
-            Previous steps
-          </button>
+      <DataTable
+        table={table}
+        testId="step-plan"
+        caption="Step plan: the vertices each step handles in parallel"
+        classes={{
+          wrapper: 'overflow-x-auto',
+          table: 'min-w-full text-left text-sm',
+          head: 'border-b border-stone-200 text-xs uppercase tracking-wide text-lichen-700',
+          headerCell: 'px-2 py-1.5 font-medium',
+          body: 'divide-y divide-stone-100',
+          row: undefined, // the body draws the lines between steps
+          cell: 'px-2 py-1.5 align-top',
+        }}
+      />
+      <Pager
+        table={table}
+        label="Step plan pages"
+        previousText="Previous steps"
+        nextText="Next steps"
+        className="flex items-center gap-2 text-sm"
+        buttonClassName={quietButtonClass}
+        position={
           <span>
-            page {pageIndex + 1} of {table.getPageCount()}
+            page {table.getState().pagination.pageIndex + 1} of {table.getPageCount()}
           </span>
-          <button type="button" className={quietButtonClass} onClick={() => table.nextPage()} disabled={!table.getCanNextPage()}>
-            Next steps
-          </button>
-        </nav>
-      )}
+        }
+      />
     </div>
   );
 }

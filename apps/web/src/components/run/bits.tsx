@@ -37,16 +37,6 @@ export function Loading({ what }: { what: string }) {
   );
 }
 
-/** The message beside a form field; `id` is what the field's aria-describedby points to. */
-export function FieldError({ id, message }: { id: string; message: string | undefined }) {
-  if (!message) return null;
-  return (
-    <p id={id} className="mt-1 text-sm text-alarm-600" role="alert">
-      {message}
-    </p>
-  );
-}
-
 export const inputClass =
   'block w-full rounded-md border border-stone-200 bg-white px-2 py-1.5 text-sm focus:border-lichen-500 focus:outline-none focus:ring-2 focus:ring-lichen-300 aria-[invalid=true]:border-alarm-600';
 export const buttonClass =

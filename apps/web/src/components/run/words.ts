@@ -12,7 +12,7 @@ export const METHOD_WORDS: Record<SolveMethod, { name: string; explain: string }
   auto: { name: 'Let Cairn choose', explain: 'A closed form when one is published for the graph, else exact search; if the time runs out you get the best proven interval.' },
   exact: { name: 'Exact search', explain: 'Search every way of splitting the graph for the true rank number, starting from the best bounds; stops at the time limit with an interval.' },
   bounds: { name: 'Bounds only', explain: 'No search: the best lower bound against the best construction. Fast on large graphs; the gap says how far from optimal the ranking may be.' },
-  formula: { name: 'Closed form', explain: 'Only a published formula (paths, cycles, complete and bipartite graphs, stars, 2-, 3- and 4-row grids); refused when none applies.' },
+  formula: { name: 'Closed form', explain: 'Only a closed form with its source (paths, cycles, complete and complete bipartite graphs, stars, 1- and 2-row grids); refused when none applies.' },
 };
 
 export const STATUS_WORDS: Record<RunStatus, string> = {

@@ -6,7 +6,8 @@ import type { z } from 'zod';
 import { fieldProblems } from '../../api/client';
 import { useCreateSweep } from '../../api/sweeps';
 import { countCells, MAX_SWEEP_CELLS, mirrorsShare } from './cells';
-import { buttonClass, FieldError, formFieldOf, inputClass } from './states';
+import { Field, FormSubmit, invalidProps } from '../form/Field';
+import { formFieldOf, inputClass } from './states';
 
 /** The shared request schema, plus the cap on cells, so the form refuses what the server would. */
 const SweepFormSchema = SweepRequest.superRefine((req, ctx) => {
@@ -32,6 +33,8 @@ const METHOD_HELP: Record<SolveMethod, string> = {
   bounds: 'lower bound and construction only, fast',
   formula: 'closed forms only; cells without one stay unknown',
 };
+
+const AXIS_WORDS = { rows: 'Rows', cols: 'Columns' } as const;
 
 const emptyToUndefined = (v: unknown) => (typeof v === 'string' && v.trim() === '' ? undefined : v);
 
@@ -76,7 +79,14 @@ export function SweepForm() {
     for (const p of parts) node = (node as Record<string, unknown> | undefined)?.[p];
     return (node as { message?: string } | undefined)?.message;
   };
-  const invalid = (name: string) => (err(name) ? { 'aria-invalid': true, 'aria-describedby': `sweep-${name.replace('.', '-')}-error` } : {});
+  const idOf = (name: string) => `sweep-${name.replace('.', '-')}`;
+  const invalid = (name: string) => invalidProps(idOf(name), err(name));
+  /** One end of the rows or columns range, labelled for screen readers only ("Rows from"). */
+  const rangeEnd = (axis: 'rows' | 'cols', end: 'from' | 'to') => (
+    <Field id={idOf(`${axis}.${end}`)} label={`${AXIS_WORDS[axis]} ${end}`} error={err(`${axis}.${end}`)} className="flex-1" labelClassName="sr-only">
+      <input id={idOf(`${axis}.${end}`)} type="number" inputMode="numeric" min={1} className={inputClass} {...register(`${axis}.${end}`, { valueAsNumber: true })} {...invalid(`${axis}.${end}`)} />
+    </Field>
+  );
 
   return (
     <form onSubmit={handleSubmit(onSubmit)} noValidate className="space-y-4 rounded-lg border border-stone-200 bg-stone-100/50 p-4 sm:p-5" aria-labelledby="sweep-form-title">
@@ -84,17 +94,18 @@ export function SweepForm() {
         New sweep
       </h2>
       <div className="grid gap-4 sm:grid-cols-2">
-        <div>
-          <label htmlFor="sweep-name" className="mb-1 block text-sm font-medium">
-            Name <span className="font-normal text-lichen-500">(optional)</span>
-          </label>
+        <Field
+          id="sweep-name"
+          label={
+            <>
+              Name <span className="font-normal text-lichen-500">(optional)</span>
+            </>
+          }
+          error={err('name')}
+        >
           <input id="sweep-name" className={inputClass} placeholder="Grid tables for the spring seminar" {...register('name', { setValueAs: emptyToUndefined })} {...invalid('name')} />
-          <FieldError id="sweep-name-error" message={err('name')} />
-        </div>
-        <div>
-          <label htmlFor="sweep-family" className="mb-1 block text-sm font-medium">
-            Family
-          </label>
+        </Field>
+        <Field id="sweep-family" label="Family" error={err('family')}>
           <select id="sweep-family" className={inputClass} {...register('family')} {...invalid('family')} aria-describedby="sweep-family-help">
             {SweepFamily.options.map((f) => (
               <option key={f} value={f}>
@@ -105,32 +116,19 @@ export function SweepForm() {
           <p id="sweep-family-help" className="mt-1 text-xs text-lichen-700">
             {FAMILY_HELP[family]}
           </p>
-          <FieldError id="sweep-family-error" message={err('family')} />
-        </div>
+        </Field>
       </div>
 
       <div className="grid gap-4 sm:grid-cols-2">
         {(['rows', 'cols'] as const).map((axis) => (
           <fieldset key={axis} className="min-w-0">
-            <legend className="mb-1 text-sm font-medium">{axis === 'rows' ? 'Rows' : 'Columns'}</legend>
+            <legend className="mb-1 text-sm font-medium">{AXIS_WORDS[axis]}</legend>
             <div className="flex items-start gap-2">
-              <div className="flex-1">
-                <label htmlFor={`sweep-${axis}-from`} className="sr-only">
-                  {axis === 'rows' ? 'Rows from' : 'Columns from'}
-                </label>
-                <input id={`sweep-${axis}-from`} type="number" inputMode="numeric" min={1} className={inputClass} {...register(`${axis}.from`, { valueAsNumber: true })} {...invalid(`${axis}.from`)} />
-                <FieldError id={`sweep-${axis}-from-error`} message={err(`${axis}.from`)} />
-              </div>
+              {rangeEnd(axis, 'from')}
               <span className="pt-1.5 text-lichen-700" aria-hidden="true">
                 to
               </span>
-              <div className="flex-1">
-                <label htmlFor={`sweep-${axis}-to`} className="sr-only">
-                  {axis === 'rows' ? 'Rows to' : 'Columns to'}
-                </label>
-                <input id={`sweep-${axis}-to`} type="number" inputMode="numeric" min={1} className={inputClass} {...register(`${axis}.to`, { valueAsNumber: true })} {...invalid(`${axis}.to`)} />
-                <FieldError id={`sweep-${axis}-to-error`} message={err(`${axis}.to`)} />
-              </div>
+              {rangeEnd(axis, 'to')}
             </div>
           </fieldset>
         ))}
@@ -150,10 +148,7 @@ export function SweepForm() {
       </p>
 
       <div className="grid gap-4 sm:grid-cols-3">
-        <div>
-          <label htmlFor="sweep-method" className="mb-1 block text-sm font-medium">
-            Method
-          </label>
+        <Field id="sweep-method" label="Method" error={err('method')}>
           <select id="sweep-method" className={inputClass} {...register('method')} {...invalid('method')}>
             {SolveMethod.options.map((m) => (
               <option key={m} value={m}>
@@ -161,12 +156,8 @@ export function SweepForm() {
               </option>
             ))}
           </select>
-          <FieldError id="sweep-method-error" message={err('method')} />
-        </div>
-        <div>
-          <label htmlFor="sweep-timeLimitSeconds" className="mb-1 block text-sm font-medium">
-            Time limit per run (seconds)
-          </label>
+        </Field>
+        <Field id="sweep-timeLimitSeconds" label="Time limit per run (seconds)" error={err('timeLimitSeconds')}>
           <input
             id="sweep-timeLimitSeconds"
             type="number"
@@ -177,12 +168,8 @@ export function SweepForm() {
             {...register('timeLimitSeconds', { valueAsNumber: true })}
             {...invalid('timeLimitSeconds')}
           />
-          <FieldError id="sweep-timeLimitSeconds-error" message={err('timeLimitSeconds')} />
-        </div>
-        <div>
-          <label htmlFor="sweep-visibility" className="mb-1 block text-sm font-medium">
-            Who may see it
-          </label>
+        </Field>
+        <Field id="sweep-visibility" label="Who may see it" error={err('visibility')}>
           <select id="sweep-visibility" className={inputClass} {...register('visibility')} {...invalid('visibility')}>
             {Visibility.options.map((v) => (
               <option key={v} value={v}>
@@ -190,18 +177,12 @@ export function SweepForm() {
               </option>
             ))}
           </select>
-          <FieldError id="sweep-visibility-error" message={err('visibility')} />
-        </div>
+        </Field>
       </div>
 
-      {errors.root?.message && (
-        <p role="alert" className="text-sm text-alarm-600">
-          {errors.root.message}
-        </p>
-      )}
-      <button type="submit" className={buttonClass} disabled={isSubmitting}>
-        {isSubmitting ? 'Starting…' : 'Start sweep'}
-      </button>
+      <FormSubmit problem={errors.root?.message} pending={isSubmitting} pendingText="Starting…">
+        Start sweep
+      </FormSubmit>
     </form>
   );
 }

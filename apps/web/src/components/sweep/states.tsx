@@ -41,16 +41,6 @@ export function PermissionNote({ signedIn, needs }: { signedIn: boolean; needs: 
   );
 }
 
-/** The message under a form field, tied to it by id for screen readers. */
-export function FieldError({ id, message }: { id: string; message: string | undefined }) {
-  if (!message) return null;
-  return (
-    <p id={id} role="alert" className="mt-1 text-sm text-alarm-600">
-      {message}
-    </p>
-  );
-}
-
 export const inputClass =
   'w-full rounded-md border border-stone-200 bg-white/70 px-2 py-1.5 text-sm text-slate-ink focus:border-lichen-500 focus:outline-none focus:ring-2 focus:ring-lichen-300 aria-[invalid=true]:border-alarm-600';
 export const buttonClass =

@@ -2,7 +2,8 @@ import { UploadFormat, type UploadResult } from '@cairn/schema';
 import { useMutation } from '@tanstack/react-query';
 import { useId, useRef, useState, type DragEvent } from 'react';
 import { errorCode, parseErrorPlace, uploadGraph } from '../../api/uploads';
-import { FieldError, inputClass, quietButtonClass } from '../run/bits';
+import { FieldError } from '../form/Field';
+import { inputClass, quietButtonClass } from '../run/bits';
 
 const FORMAT_WORDS: Record<UploadFormat, string> = {
   'edge-list': 'Edge list (u v per line)',

@@ -5,7 +5,8 @@ import { useForm, useWatch } from 'react-hook-form';
 import { z } from 'zod';
 import { fieldProblems } from '../../api/client';
 import { useUploadedGraphs, useVerify } from '../../api/verify';
-import { buttonClass, ErrorNote, FieldError, formFieldOf, inputClass, quietButtonClass } from '../sweep/states';
+import { Field, FieldError, FormSubmit } from '../form/Field';
+import { ErrorNote, formFieldOf, inputClass, quietButtonClass } from '../sweep/states';
 import { readGraphInput, type GraphInput } from './graph-input';
 import { parseLabelCsv, parseLabelText } from './parse-labels';
 import { VerifyResult } from './VerifyResult';
@@ -82,6 +83,9 @@ function readText(file: File): Promise<string> {
     reader.readAsText(file);
   });
 }
+
+/** The graph's boxes stand under the bold "Graph" legend, so their own labels are plain. */
+const GRAPH_LABEL_CLASS = 'mb-1 block text-sm';
 
 /** Where a server field problem belongs on this form. */
 const FIELD_OF: Record<string, keyof FormValues> = { spec: 'graphText', graphId: 'graphId', labels: 'labelsText' };
@@ -167,10 +171,7 @@ export function VerifyForm() {
             </label>
           </div>
           {source === 'text' ? (
-            <div>
-              <label htmlFor="verify-graphText" className="mb-1 block text-sm">
-                Spec or mask
-              </label>
+            <Field id="verify-graphText" label="Spec or mask" error={errors.graphText?.message} labelClassName={GRAPH_LABEL_CLASS}>
               <textarea
                 id="verify-graphText"
                 rows={4}
@@ -184,13 +185,9 @@ export function VerifyForm() {
               <p id="verify-graph-hint" className="mt-1 text-xs text-lichen-700" aria-live="polite">
                 {hint === null ? 'grid:R×C, cylinder:R×C, torus:R×C, staircase:T, path:N, … or a pasted mask.' : hint.ok ? `Read as ${hint.input.describe}.` : ''}
               </p>
-              <FieldError id="verify-graphText-error" message={errors.graphText?.message} />
-            </div>
+            </Field>
           ) : (
-            <div>
-              <label htmlFor="verify-graphId" className="mb-1 block text-sm">
-                Uploaded graph
-              </label>
+            <Field id="verify-graphId" label="Uploaded graph" error={errors.graphId?.message} labelClassName={GRAPH_LABEL_CLASS}>
               {uploads.isError ? (
                 <ErrorNote error={uploads.error} what="list your uploads" />
               ) : (
@@ -210,8 +207,7 @@ export function VerifyForm() {
                   ))}
                 </select>
               )}
-              <FieldError id="verify-graphId-error" message={errors.graphId?.message} />
-            </div>
+            </Field>
           )}
         </fieldset>
 
@@ -259,14 +255,9 @@ export function VerifyForm() {
           </div>
         </div>
 
-        {errors.root?.message && (
-          <p role="alert" className="text-sm text-alarm-600">
-            {errors.root.message}
-          </p>
-        )}
-        <button type="submit" className={buttonClass} disabled={isSubmitting}>
-          {isSubmitting ? 'Checking…' : 'Check the labelling'}
-        </button>
+        <FormSubmit problem={errors.root?.message} pending={isSubmitting} pendingText="Checking…">
+          Check the labelling
+        </FormSubmit>
       </form>
       {/* Always present, so screen readers hear the verdict without reading out the whole picture. */}
       <p className="sr-only" aria-live="polite">
