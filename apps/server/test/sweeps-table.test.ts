@@ -60,6 +60,21 @@ describe('a sweep of grids', () => {
     }
   });
 
+  it('gives each 2 x n cell its closed form for the chart, and the 3-row cells none', async () => {
+    const done = await waitForSweep(sweep.sweep.id);
+    // χr(P_2 × P_n) = ⌊log2(n + 1)⌋ + ⌊log2((n + 1)/3)⌋ + 2, with ⌊log2 x⌋ = −1 for x < 1 (Alpert, "Rank numbers of
+    // grid graphs", Discrete Math. 2010; stated from memory in FORMULAS.md, checked by exhaustive search).
+    const floorLog2 = (x: number) => (x < 1 ? -1 : Math.floor(Math.log2(x)));
+    const twoRows = (n: number) => floorLog2(n + 1) + floorLog2((n + 1) / 3) + 2;
+    for (const c of done.cells) {
+      if (c.rows === 2 || c.cols === 2) {
+        const n = c.rows === 2 ? c.cols : c.rows;
+        expect(c.closedForm?.value, `${c.rows}x${c.cols}`).toBe(twoRows(n));
+        expect(c.closedForm?.value).toBe(c.rankNumber);
+      } else expect(c.closedForm, `${c.rows}x${c.cols}`).toBeNull();
+    }
+  });
+
   it('exports the table as CSV, one row per cell', async () => {
     const res = await fetch(`${h.base}/api/v1/sweeps/${sweep.sweep.id}/export?format=csv`, { headers: { authorization: owner } });
     expect(res.status).toBe(200);

@@ -18,14 +18,15 @@ const cell = (rows: number, cols: number, over: Partial<SweepCell>): SweepCell =
   upper: null,
   provenance: null,
   mirrorOf: null,
+  closedForm: null,
   ...over,
 });
 
 // Invented demo cells of a 2..3 x 2..4 grid sweep: the values are made up for the table, not results.
 const cells: SweepCell[] = [
-  cell(2, 2, { runId: run(1), status: 'done', rankNumber: 3, lower: 3, upper: 3, provenance: 'formula:grid-2xn' }),
-  cell(2, 3, { runId: run(2), status: 'done', rankNumber: 3, lower: 3, upper: 3, provenance: 'formula:grid-2xn' }),
-  cell(2, 4, { runId: run(3), status: 'done', rankNumber: null, lower: 3, upper: 4, provenance: 'bound' }),
+  cell(2, 2, { runId: run(1), status: 'done', rankNumber: 3, lower: 3, upper: 3, provenance: 'formula:grid-2xn', closedForm: { value: 3, id: 'grid-2xn' } }),
+  cell(2, 3, { runId: run(2), status: 'done', rankNumber: 3, lower: 3, upper: 3, provenance: 'formula:grid-2xn', closedForm: { value: 3, id: 'grid-2xn' } }),
+  cell(2, 4, { runId: run(3), status: 'done', rankNumber: null, lower: 3, upper: 4, provenance: 'bound', closedForm: { value: 4, id: 'grid-2xn' } }),
   cell(3, 2, { runId: run(2), status: 'done', rankNumber: 3, lower: 3, upper: 3, provenance: 'formula:grid-2xn', mirrorOf: { rows: 2, cols: 3 } }),
   cell(3, 3, { runId: run(4), status: 'running', lower: 3, upper: 5 }),
   cell(3, 4, { runId: run(5), status: 'queued' }),
@@ -96,6 +97,13 @@ describe('sweepChartData', () => {
     const at3 = data.points.find((p) => p.cols === 3)!;
     expect([at3.l2, at3.u2, at3.f2]).toEqual([3, 3, true]);
     expect(data.formulaCells).toBe(3);
+  });
+
+  it('draws a closed-form curve only for row counts with closed forms, through their values', () => {
+    const data = sweepChartData(view);
+    expect(data.curveRows).toEqual([2]);
+    expect(data.points.map((p) => p.c2)).toEqual([3, 3, 4]);
+    expect(data.points.map((p) => p.c3)).toEqual([null, null, null]);
   });
 });
 

@@ -235,6 +235,8 @@ export const SweepCell = z.object({
   upper: z.number().int().nullable(),
   provenance: z.string().nullable(),
   mirrorOf: z.object({ rows: z.number().int(), cols: z.number().int() }).nullable(),
+  /** The cell's value by a closed form with a source, whatever its run says (for the chart's formula curve). */
+  closedForm: z.object({ value: z.number().int(), id: z.string() }).nullable(),
 });
 export type SweepCell = z.infer<typeof SweepCell>;
 

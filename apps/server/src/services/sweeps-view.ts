@@ -5,6 +5,7 @@ import { HttpError } from '../http/errors';
 import type { MemberActor } from './graphs';
 import { queryRows } from './run-row';
 import { distinctRuns, MIRRORED_FAMILIES, sweepCells } from './sweeps-cells';
+import { closedFormOf } from './sweep-closed-form';
 
 interface SweepRow {
   id: string;
@@ -97,6 +98,7 @@ export async function loadSweepView(source: DataSource, id: string): Promise<Swe
       upper: run?.upper ?? null,
       provenance: run?.provenance ?? null,
       mirrorOf: mirrored ? { rows: c.runRows, cols: c.runCols } : null,
+      closedForm: closedFormOf(s.family, c.rows, c.cols),
     };
   });
   return { sweep: summaryOf(s, counts), cells };

@@ -63,11 +63,27 @@ export default function SweepChart({ view }: { view: SweepView }) {
                 isAnimationActive={false}
               />,
             ])}
+            {data.curveRows.map((r) => (
+              <Line
+                key={`c${r}`}
+                dataKey={`c${r}`}
+                name={`${r} row${r === 1 ? '' : 's'}, closed form`}
+                stroke="#c98a3a"
+                strokeWidth={1.5}
+                strokeDasharray="1 3"
+                strokeLinecap="round"
+                dot={false}
+                connectNulls={false}
+                isAnimationActive={false}
+                data-testid={`closed-form-curve-${r}`}
+              />
+            ))}
           </LineChart>
         </ResponsiveContainer>
       </div>
       <figcaption className="text-sm text-lichen-700">
-        Solid: upper bound (the value where exact). Dashed: lower bound. Where they meet the value is known.{' '}
+        Solid: upper bound (the value where exact). Dashed: lower bound. Where they meet the value is known.
+        {data.curveRows.length > 0 ? ' Dotted ochre: the closed form, where one is published.' : ''}{' '}
         <span className="inline-flex items-center gap-1">
           <span className="inline-block h-2.5 w-2.5 border-2 border-ochre-500 bg-stone-50" aria-hidden="true" /> a closed form gives the value
         </span>

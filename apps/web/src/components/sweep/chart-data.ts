@@ -1,13 +1,18 @@
 import type { SweepView } from '@cairn/schema';
 import { isFormula } from './cells';
 
-/** One point per column count; per row count r the keys `u<r>` (upper, the value when exact), `l<r>` (lower), `f<r>` (closed form). */
+/**
+ * One point per column count; per row count r the keys `u<r>` (upper, the value when exact), `l<r>` (lower),
+ * `f<r>` (whether the run's value came from a closed form) and `c<r>` (the closed form's value, where one exists).
+ */
 export type ChartPoint = { cols: number } & Record<string, number | boolean | null>;
 
 export interface SweepChartData {
   points: ChartPoint[];
   rowCounts: number[];
   formulaCells: number;
+  /** Row counts with a closed-form curve (at least two cells with a closed form). */
+  curveRows: number[];
 }
 
 /** The sweep's cells as chart series: value, lower and upper bound against the column count, one series per row count. */
@@ -27,8 +32,10 @@ export function sweepChartData({ sweep, cells }: SweepView): SweepChartData {
     const formula = isFormula(cell.provenance);
     p[`f${cell.rows}`] = formula;
     if (formula) formulaCells++;
+    p[`c${cell.rows}`] = cell.closedForm?.value ?? null;
   }
-  return { points: [...points.values()], rowCounts, formulaCells };
+  const curveRows = rowCounts.filter((r) => cells.filter((c) => c.rows === r && c.closedForm).length >= 2);
+  return { points: [...points.values()], rowCounts, formulaCells, curveRows };
 }
 
 /** Series colours from Cairn's palette, repeated when there are more row counts than colours. */
