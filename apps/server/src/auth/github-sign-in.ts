@@ -3,7 +3,7 @@ import { Strategy as GitHubStrategy, type Profile } from 'passport-github2';
 import type { ServerContext, SignInProvider } from '../context';
 import type { User } from '../entities/user.entity';
 import { upsertSignedInMember } from '../services/members';
-import { connectOrUnavailable } from './database';
+import { connectOrUnavailable } from '../db/connect-or-unavailable';
 
 export const SIGN_IN_CALLBACK_PATH = '/api/v1/auth/github/callback';
 export const SIGN_IN_SCOPE = ['read:user', 'user:email'];

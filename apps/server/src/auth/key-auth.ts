@@ -2,7 +2,7 @@ import type { RequestHandler } from 'express';
 import type { ServerContext } from '../context';
 import { HttpError } from '../http/errors';
 import { useApiKey } from '../services/api-keys';
-import { connectOrUnavailable } from './database';
+import { connectOrUnavailable } from '../db/connect-or-unavailable';
 
 const BEARER = /^Bearer[ ]+(\S+)[ ]*$/i;
 

@@ -1,7 +1,7 @@
 import type { RequestHandler } from 'express';
 import type { ServerContext } from '../context';
 import { User } from '../entities/user.entity';
-import { connectOrUnavailable } from './database';
+import { connectOrUnavailable } from '../db/connect-or-unavailable';
 
 /**
  * A request not already identified by a key is the member its session names, read afresh each time (so a

@@ -4,7 +4,7 @@ import type { AuthenticateCallback } from 'passport';
 import type { AppContext } from '../app';
 import { actorUser, permissionsOf } from '../auth/actor';
 import { newCsrfToken } from '../auth/csrf';
-import { connectOrUnavailable } from '../auth/database';
+import { connectOrUnavailable } from '../db/connect-or-unavailable';
 import { githubSignIn } from '../auth/github-sign-in';
 import { actorOf, requirePermission, requireUser } from '../auth/require';
 import { SESSION_COOKIE, sessionCookieOptions } from '../auth/session';

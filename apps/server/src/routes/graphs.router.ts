@@ -1,3 +1,4 @@
+import { connectOrUnavailable } from '../db/connect-or-unavailable';
 import { Router, type Request, type RequestHandler } from 'express';
 import multer from 'multer';
 import { StoredGraphList, StoredGraphListQuery, StoredGraphParams, StoredGraphView, UploadFields, UploadForm, UploadResult } from '@cairn/schema';
@@ -41,7 +42,7 @@ export function graphsRouter(ctx: AppContext): Router {
     if (!file) throw missingFile(req.is('multipart/form-data') ? 'the form has no file in the field "file"' : 'send multipart/form-data with the graph file in the field "file"');
     const name = uploadName(fields.name, file.originalname);
     const { format, read } = await readUploadWithoutBlocking(file.buffer, name, fields.format);
-    const source = await ctx.db.connect();
+    const source = await connectOrUnavailable(ctx.db);
     const { graph, created } = await storeUpload(source, user.id, { name, format, bytes: file.buffer, read });
     const [view] = await graphViews(source, [graph]);
     const body: UploadResult = { graph: view!, created, warnings: read.warnings, warningCount: read.warningCount };
@@ -51,7 +52,7 @@ export function graphsRouter(ctx: AppContext): Router {
   documentRoute({ method: 'get', path: '/api/v1/graphs', tag: TAG, summary: 'List uploaded graphs: your own, or every one for an admin; newest first', needs: 'runs:read', query: StoredGraphListQuery, response: StoredGraphList });
   router.get('/graphs', requirePermission('runs:read'), async (req, res) => {
     const query = parseQuery(StoredGraphListQuery, req);
-    const source = await ctx.db.connect();
+    const source = await connectOrUnavailable(ctx.db);
     const { graphs, total } = await listGraphs(source, memberActor(req), query);
     const body: StoredGraphList = { items: await graphViews(source, graphs), total, limit: query.limit, offset: query.offset };
     res.json(body);
@@ -60,7 +61,7 @@ export function graphsRouter(ctx: AppContext): Router {
   documentRoute({ method: 'get', path: '/api/v1/graphs/:id', tag: TAG, summary: 'One uploaded graph (its owner or an admin)', needs: 'runs:read', params: StoredGraphParams, response: StoredGraphView, errors: [404] });
   router.get('/graphs/:id', requirePermission('runs:read'), async (req, res) => {
     const { id } = parseParams(StoredGraphParams, req);
-    const source = await ctx.db.connect();
+    const source = await connectOrUnavailable(ctx.db);
     const [view] = await graphViews(source, [await findVisibleGraph(source, memberActor(req), id)]);
     res.json(view);
   });
@@ -77,7 +78,7 @@ export function graphsRouter(ctx: AppContext): Router {
   });
   router.get('/graphs/:id/content', requirePermission('runs:read'), async (req, res) => {
     const { id } = parseParams(StoredGraphParams, req);
-    const source = await ctx.db.connect();
+    const source = await connectOrUnavailable(ctx.db);
     const graph = await findVisibleGraph(source, memberActor(req), id, true);
     res.attachment(graph.name);
     res.setHeader('Content-Type', CONTENT_TYPE[graph.format] ?? TEXT);
@@ -97,7 +98,7 @@ export function graphsRouter(ctx: AppContext): Router {
   });
   router.delete('/graphs/:id', requirePermission('runs:write'), async (req, res) => {
     const { id } = parseParams(StoredGraphParams, req);
-    const source = await ctx.db.connect();
+    const source = await connectOrUnavailable(ctx.db);
     await findVisibleGraph(source, memberActor(req), id);
     await deleteGraph(source, id);
     res.status(204).end();

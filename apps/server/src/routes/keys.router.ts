@@ -2,7 +2,7 @@ import { ApiKeyCreatedResponse, ApiKeyCreateRequest, ApiKeyIdParams, ApiKeysQuer
 import { Router } from 'express';
 import type { AppContext } from '../app';
 import { requireAdminSession } from '../auth/admin-session';
-import { connectOrUnavailable } from '../auth/database';
+import { connectOrUnavailable } from '../db/connect-or-unavailable';
 import { requireUser } from '../auth/require';
 import { HttpError } from '../http/errors';
 import { parseBody, parseParams, parseQuery } from '../http/validate';

@@ -1,3 +1,4 @@
+import { connectOrUnavailable } from '../db/connect-or-unavailable';
 import { QuickAnswer, QuickQuery } from '@cairn/schema';
 import { Router } from 'express';
 import type { AppContext } from '../app';
@@ -20,7 +21,7 @@ export function quickRouter(ctx: AppContext): Router {
   });
   router.get('/quick', requirePermission('atlas:read'), async (req, res) => {
     const { spec } = parseQuery(QuickQuery, req);
-    res.json(await quickAnswer(await ctx.db.connect(), spec));
+    res.json(await quickAnswer(await connectOrUnavailable(ctx.db), spec));
   });
   return router;
 }

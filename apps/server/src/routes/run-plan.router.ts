@@ -1,3 +1,4 @@
+import { connectOrUnavailable } from '../db/connect-or-unavailable';
 import { RunIdParams, RunPlan, ShareTokenParams } from '@cairn/schema';
 import { Router } from 'express';
 import type { AppContext } from '../app';
@@ -22,7 +23,7 @@ export function runPlanRouter(ctx: AppContext): Router {
   });
   router.get('/runs/:id/plan', requirePermission('runs:read'), async (req, res) => {
     const { id } = parseParams(RunIdParams, req);
-    const source = await ctx.db.connect();
+    const source = await connectOrUnavailable(ctx.db);
     res.json(await runPlanOf(source, await findVisibleRun(source, memberActorOf(req), id)));
   });
   documentRoute({
@@ -36,7 +37,7 @@ export function runPlanRouter(ctx: AppContext): Router {
   });
   router.get('/shared/:token/plan', async (req, res) => {
     const { token } = parseParams(ShareTokenParams, req);
-    const source = await ctx.db.connect();
+    const source = await connectOrUnavailable(ctx.db);
     res.json(await runPlanOf(source, await findSharedRun(source, token)));
   });
   return router;

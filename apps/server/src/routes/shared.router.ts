@@ -1,7 +1,7 @@
 import { RunExportQuery, RunView, ShareTokenParams } from '@cairn/schema';
 import { Router } from 'express';
 import type { AppContext } from '../app';
-import { connectOrUnavailable } from '../auth/database';
+import { connectOrUnavailable } from '../db/connect-or-unavailable';
 import { parseParams, parseQuery } from '../http/validate';
 import { documentRoute } from '../openapi/route-docs';
 import { exportRun } from '../services/run-export';

@@ -1,7 +1,7 @@
 import { SweepExportQuery, SweepIdParams, SweepList, SweepListQuery, SweepRequest, SweepView } from '@cairn/schema';
 import { Router } from 'express';
 import type { AppContext } from '../app';
-import { connectOrUnavailable } from '../auth/database';
+import { connectOrUnavailable } from '../db/connect-or-unavailable';
 import { requirePermission } from '../auth/require';
 import { parseBody, parseParams, parseQuery } from '../http/validate';
 import { documentRoute } from '../openapi/route-docs';

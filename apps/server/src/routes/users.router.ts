@@ -2,7 +2,7 @@ import { MemberIdParams, MemberResponse, MemberRoleRequest, MembersResponse } fr
 import { Router } from 'express';
 import type { AppContext } from '../app';
 import { requireAdminSession } from '../auth/admin-session';
-import { connectOrUnavailable } from '../auth/database';
+import { connectOrUnavailable } from '../db/connect-or-unavailable';
 import { HttpError } from '../http/errors';
 import { parseBody, parseParams } from '../http/validate';
 import { documentRoute } from '../openapi/route-docs';

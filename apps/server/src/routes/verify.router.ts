@@ -1,3 +1,4 @@
+import { connectOrUnavailable } from '../db/connect-or-unavailable';
 import express, { Router, type RequestHandler } from 'express';
 import { EngineError, graphFromSpec, LabelError, parseGraphSpec, verifyRanking, type GraphSpec as EngineGraphSpec, type RankingViolation } from '@cairn/engine';
 import { VerifyRequest, VerifyResponse } from '@cairn/schema';
@@ -84,7 +85,7 @@ async function verifyTarget(ctx: AppContext, actor: MemberActor, body: VerifyReq
     const spec = engineSpec(body.spec!);
     return { spec, files: {}, size: sizeOf(spec), field: 'body.spec' };
   }
-  const stored = await findVisibleGraph(await ctx.db.connect(), actor, graphId, true);
+  const stored = await findVisibleGraph(await connectOrUnavailable(ctx.db), actor, graphId, true);
   return {
     spec: { family: 'file', file: stored.name, format: stored.format },
     files: { [stored.name]: stored.content },

@@ -1,5 +1,5 @@
 import type { DataSource } from 'typeorm';
-import type { Database } from '../db/database';
+import type { Database } from './database';
 import { HttpError } from '../http/errors';
 
 /** The data source for a request; 503 (not a 500) while PostgreSQL does not answer. */
