@@ -1,5 +1,5 @@
 import { SizeError } from '../errors';
-import { graphFromEdges } from '../graph/from-edges';
+import { checkVertexCount, graphFromEdges } from '../graph/from-edges';
 import type { Graph } from '../graph/graph';
 import { MAX_EDGES } from '../graph/limits';
 import { seededRandom } from './seeded-random';
@@ -12,6 +12,8 @@ import { checkWhole } from './sizes';
  */
 export function randomGraph(n: number, p: number, seed: number): Graph {
   checkWhole('random graph', 'n', n, 1);
+  // Before any loop: the walk below visits every vertex, so an absurd n must be refused up front.
+  checkVertexCount(n, 'random graph: n');
   if (!(p >= 0 && p <= 1)) throw new SizeError(`random graph: p must be a probability in [0, 1], got ${p}`);
   const expected = (p * n * (n - 1)) / 2;
   if (expected > MAX_EDGES / 2) throw new SizeError(`random graph: about ${Math.round(expected)} edges expected; at most ${MAX_EDGES / 2} may be asked for`);

@@ -104,7 +104,8 @@ export function writeMatrixMarket(graph: Graph): string {
 
 function readBanner(cursor: LineCursor): { field: Field; symmetry: Symmetry } {
   const expectedBanner = `the banner "${BANNER} matrix coordinate <field> <symmetry>"`;
-  if (!cursor.nextLine()) cursor.fail(0, expectedBanner, 'empty text');
+  // Empty text has no line of its own; the banner is missing at the start of line 1.
+  if (!cursor.nextLine()) throw new ParseError(FORMAT, { line: 1, column: 1 }, expectedBanner, 'empty text');
   const text = cursor.text;
   if (!text.startsWith(BANNER, cursor.start) || (cursor.start + BANNER.length < cursor.end && !cursor.isDelimiter(text.charCodeAt(cursor.start + BANNER.length)))) {
     cursor.fail(cursor.start, expectedBanner, cursor.start === cursor.end ? 'an empty line' : cursor.found(cursor.start), 'not a Matrix Market file');

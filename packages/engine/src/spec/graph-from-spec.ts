@@ -76,5 +76,8 @@ function familyGraph(s: Exclude<GraphSpec, { family: 'file' }>, loader: FileLoad
       if (parents === undefined) throw new SpecError('tree: expected a file or the parent array');
       return treeFromParents(parents);
     }
+    default:
+      // Only reachable from untyped callers (JSON from elsewhere): name what came instead of a family.
+      throw new SpecError(`unknown graph family ${JSON.stringify((s as { family?: unknown }).family) ?? '(none)'}`);
   }
 }
