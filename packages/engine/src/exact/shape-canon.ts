@@ -90,6 +90,105 @@ export class ShapeCanon {
     return out;
   }
 
+  /**
+   * A lower bound of td(set) from the rectangles of its bounding box: for a rectangle R with a proven
+   * value(R), td(set) >= td(set ∩ R) >= value(R) - |R \ set|, since td never grows on subgraphs and
+   * removing one vertex lowers it by at most one (DESIGN, "Monotonicity"). With R full this is the plain
+   * rectangle bound; a rectangle with a few cells missing often does better.
+   */
+  rectangleBound(set: Bitset, value: (h: number, w: number) => number): number {
+    const { r0, r1, c0, c1 } = this.boundingBox(set.toArray());
+    const H = r1 - r0 + 1;
+    const W = c1 - c0 + 1;
+    // prefix[(r) * (W + 1) + c] = cells of the set in rows < r, columns < c of the box.
+    const stride = W + 1;
+    const prefix = new Int32Array((H + 1) * stride);
+    for (let r = 0; r < H; r++) {
+      let run = 0;
+      for (let c = 0; c < W; c++) {
+        const v = this.vertexAt[(r + r0) * this.cols + c + c0]!;
+        if (v >= 0 && set.has(v)) run++;
+        prefix[(r + 1) * stride + c + 1] = prefix[r * stride + c + 1]! + run;
+      }
+    }
+    let best = 0;
+    for (let h = 1; h <= H; h++) {
+      for (let w = 1; w <= W; w++) {
+        const full = value(h, w);
+        if (full <= best) continue;
+        // The fewest missing cells over the h x w windows of the box.
+        let most = 0;
+        for (let r = 0; r + h <= H; r++) {
+          for (let c = 0; c + w <= W; c++) {
+            const inside = prefix[(r + h) * stride + c + w]! - prefix[r * stride + c + w]! - prefix[(r + h) * stride + c]! + prefix[r * stride + c]!;
+            if (inside > most) most = inside;
+          }
+        }
+        const bound = full - (h * w - most);
+        if (bound > best) best = bound;
+      }
+    }
+    return best;
+  }
+
+  /**
+   * Where the top of an elimination of `set` in at most k labels can be: td(set - v) <= k - 1 needs
+   * value(R) - |R \ set| - [v in R] <= k - 1 for every rectangle R (the bound of rectangleBound), so v
+   * lies in every rectangle whose bound is k, and no rectangle may bound the set above k. Returns the
+   * intersection of those rectangles as [r0, r1, c0, c1] in grid coordinates (inclusive), or undefined
+   * when no top can do.
+   */
+  topWindow(set: Bitset, k: number, value: (h: number, w: number) => number): [number, number, number, number] | undefined {
+    const { r0, r1, c0, c1 } = this.boundingBox(set.toArray());
+    const H = r1 - r0 + 1;
+    const W = c1 - c0 + 1;
+    const stride = W + 1;
+    const prefix = new Int32Array((H + 1) * stride);
+    for (let r = 0; r < H; r++) {
+      let run = 0;
+      for (let c = 0; c < W; c++) {
+        const v = this.vertexAt[(r + r0) * this.cols + c + c0]!;
+        if (v >= 0 && set.has(v)) run++;
+        prefix[(r + 1) * stride + c + 1] = prefix[r * stride + c + 1]! + run;
+      }
+    }
+    let lo = 0;
+    let hi = H - 1;
+    let left = 0;
+    let right = W - 1;
+    for (let h = 1; h <= H; h++) {
+      for (let w = 1; w <= W; w++) {
+        const need = h * w + k - value(h, w); // a window with at least this many cells bounds the set by k
+        if (need > h * w) continue;
+        for (let r = 0; r + h <= H; r++) {
+          for (let c = 0; c + w <= W; c++) {
+            const inside = prefix[(r + h) * stride + c + w]! - prefix[r * stride + c + w]! - prefix[(r + h) * stride + c]! + prefix[r * stride + c]!;
+            if (inside < need) continue;
+            if (inside > need) return undefined; // bound k + 1 or more: the set does not fit in k labels
+            if (r > lo) lo = r;
+            if (r + h - 1 < hi) hi = r + h - 1;
+            if (c > left) left = c;
+            if (c + w - 1 < right) right = c + w - 1;
+          }
+        }
+      }
+    }
+    if (lo > hi || left > right) return undefined;
+    return [lo + r0, hi + r0, left + c0, right + c0];
+  }
+
+  /** How far vertex v lies from the middle of the window (twice the Manhattan distance, so whole). */
+  offCentre(v: number, win: readonly [number, number, number, number]): number {
+    return Math.abs(2 * this.row[v]! - win[0] - win[1]) + Math.abs(2 * this.col[v]! - win[2] - win[3]);
+  }
+
+  /** Whether vertex v lies in the window [r0, r1, c0, c1] (grid coordinates, inclusive). */
+  inWindow(v: number, win: readonly [number, number, number, number]): boolean {
+    const r = this.row[v]!;
+    const c = this.col[v]!;
+    return r >= win[0] && r <= win[1] && c >= win[2] && c <= win[3];
+  }
+
   canonical(set: Bitset): CanonicalShape {
     const members = set.toArray();
     const { r0, r1, c0, c1 } = this.boundingBox(members);
@@ -98,7 +197,11 @@ export class ShapeCanon {
     let best: Uint32Array | undefined;
     let bestT = 0;
     const words = (h * w + 31) >>> 5;
-    for (let t = 0; t < 8; t++) {
+    // The key starts with the box's dimensions, so with h < w only the four symmetries keeping the box
+    // upright can be least, with h > w only the four turning it; a square needs all eight.
+    const tFrom = h > w ? 4 : 0;
+    const tTo = h < w ? 4 : 8;
+    for (let t = tFrom; t < tTo; t++) {
       const [H, W] = t < 4 ? [h, w] : [w, h];
       const cand = new Uint32Array(1 + words);
       cand[0] = (H << 16) | W;
@@ -111,20 +214,33 @@ export class ShapeCanon {
         bestT = t;
       }
     }
-    const t = bestT;
-    const key = new Bitset(32 * best!.length, best);
-    const self = this;
-    return {
-      key,
-      toCanonical: (v) => transformIndex(t, self.row[v]! - r0, self.col[v]! - c0, h, w),
-      fromCanonical: (i) => {
-        const W = t < 4 ? w : h;
-        const cr = Math.floor(i / W);
-        const cc = i % W;
-        const [r, c] = inverse(t, cr, cc, h, w);
-        return self.vertexAt[(r + r0) * self.cols + c + c0]!;
-      },
-    };
+    return new Frame(new Bitset(32 * best!.length, best), bestT, r0, c0, h, w, this.row, this.col, this.vertexAt, this.cols);
+  }
+}
+
+/** A set's canonical frame: its key and the symmetry and offset that map it there (no closures kept). */
+class Frame implements CanonicalShape {
+  constructor(
+    readonly key: Bitset,
+    private readonly t: number,
+    private readonly r0: number,
+    private readonly c0: number,
+    private readonly h: number,
+    private readonly w: number,
+    private readonly row: Int32Array,
+    private readonly col: Int32Array,
+    private readonly vertexAt: Int32Array,
+    private readonly cols: number,
+  ) {}
+
+  toCanonical(v: number): number {
+    return transformIndex(this.t, this.row[v]! - this.r0, this.col[v]! - this.c0, this.h, this.w);
+  }
+
+  fromCanonical(i: number): number {
+    const W = this.t < 4 ? this.w : this.h;
+    const [r, c] = inverse(this.t, Math.floor(i / W), i % W, this.h, this.w);
+    return this.vertexAt[(r + this.r0) * this.cols + c + this.c0]!;
   }
 }
 

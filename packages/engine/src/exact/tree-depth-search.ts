@@ -13,16 +13,27 @@ export interface SearchLimits {
   deadline?: number | undefined;
 }
 
+/** One component of a vertex set, with its memo entry and (for grid shapes) its canonical frame. */
+interface Part {
+  c: Bitset;
+  e: MemoEntry;
+  shape: CanonicalShape | undefined;
+}
+
 /**
  * Exact tree-depth by search over vertex sets, from the defining recursion (Nešetřil & Ossona de Mendez,
  * Sparsity, 2012): td(empty) = 0, td(G) = max over components, td(G) = 1 + min_v td(G - v) for connected G.
- * Asked in decision form, "td(S) <= k?", with the largest component first, every set's proven bounds
- * memoised, and cheap lower bounds (|S| for a clique, the path bound from a breadth-first eccentricity)
- * cutting branches that cannot fit.
+ * Asked in decision form, "td(S) <= k?", every component first checked against its proven bounds, every
+ * set's proven bounds memoised, and lower bounds cutting branches that cannot fit: degeneracy + 1 and the
+ * path bound from a breadth-first eccentricity, and for grid shapes the rectangle bound with missing
+ * cells (value(R) - |R \ S| for each rectangle R of the bounding box). The same bound confines the top:
+ * it must lie in every rectangle that already bounds S by k (see ShapeCanon.topWindow).
  */
 export class TreeDepthSearch {
   readonly memo = new BitsetMemo();
   nodes = 0;
+  /** Grid shapes: raw vertex set -> its entry and canonical frame (see entryOf). */
+  private readonly raw = new Map<number, { set: Bitset; e: MemoEntry; shape: CanonicalShape | undefined }[]>();
   private readonly n: number;
   private readonly adj: Bitset[];
   /** All vertices, highest degree first: the order in which tops are tried. */
@@ -66,10 +77,35 @@ export class TreeDepthSearch {
   }
 
   /**
-   * Proven lower bound for a connected set: the degeneracy plus one (td >= tw + 1 >= degeneracy + 1;
-   * a clique gets its size this way), and the path bound from a breadth-first eccentricity.
+   * Proven lower bound for a connected set: the degeneracy plus one (skipped for grid shapes, see
+   * degeneracyBound), the path bound from a breadth-first eccentricity, and for grid shapes the
+   * rectangle bound with missing cells.
    */
   private cheapLowerBound(c: Bitset, size: number): number {
+    const byDegeneracy = this.canon ? Math.min(size, 2) : this.degeneracyBound(c, size);
+    // A breadth-first search from the first vertex reaches a vertex at distance ecc: a path of ecc + 1
+    // vertices, so td >= ⌊log2(ecc + 1)⌋ + 1 (Bodlaender et al., SIAM J. Discrete Math. 1998).
+    let ecc = 0;
+    const seen = new Bitset(this.n).add(c.first());
+    let frontier = seen.clone();
+    const next = new Bitset(this.n);
+    for (;;) {
+      next.clear();
+      frontier.forEach((v) => next.orWith(this.adj[v]!));
+      next.andWith(c).andNotWith(seen);
+      if (next.isEmpty()) break;
+      seen.orWith(next);
+      frontier.copyFrom(next);
+      ecc++;
+    }
+    return Math.max(byDegeneracy, 32 - Math.clz32(ecc + 1), this.rectangleBound(c));
+  }
+
+  /**
+   * The degeneracy plus one (td >= tw + 1 >= degeneracy + 1; a clique gets its size this way). Grid shapes
+   * skip it: their degeneracy is at most 2, and a 2 x 2 block gives the 3 through the rectangle bound.
+   */
+  private degeneracyBound(c: Bitset, size: number): number {
     // Degeneracy: repeatedly remove a vertex of least degree inside what is left (Matula & Beck 1983).
     const left = c.clone();
     const deg = new Int32Array(this.n);
@@ -86,41 +122,26 @@ export class TreeDepthSearch {
         if (left.has(w)) deg[w]!--;
       });
     }
-    const byDegeneracy = degeneracy + 1;
-    // A breadth-first search from the first vertex reaches a vertex at distance ecc: a path of ecc + 1
-    // vertices, so td >= ⌊log2(ecc + 1)⌋ + 1 (Bodlaender et al., SIAM J. Discrete Math. 1998).
-    let ecc = 0;
-    const seen = new Bitset(this.n).add(c.first());
-    let frontier = seen.clone();
-    for (;;) {
-      const next = new Bitset(this.n);
-      frontier.forEach((v) => next.orWith(this.adj[v]!));
-      next.andWith(c).andNotWith(seen);
-      if (next.isEmpty()) break;
-      seen.orWith(next);
-      frontier = next;
-      ecc++;
-    }
-    return Math.max(byDegeneracy, 32 - Math.clz32(ecc + 1), this.rectangleBound(c));
+    return degeneracy + 1;
   }
 
   /**
-   * For grid shapes: the best value of a full rectangle inside the set (td never grows on subgraphs): an
-   * exact value proven earlier in this search, else the closed forms for sides 1 and 2 (Bodlaender et al.
-   * 1998; Alpert 2010) and the treewidth bound min(h, w) + 1 (td >= tw + 1).
+   * For grid shapes: the best of value(R) - |R \ C| over the rectangles R of C's bounding box, where
+   * value(R) is an exact value proven earlier in this search, else the closed forms for sides 1 and 2
+   * (Bodlaender et al. 1998; Alpert 2010) and the treewidth bound min(h, w) + 1 (td >= tw + 1).
    */
   private rectangleBound(c: Bitset): number {
     if (!this.canon) return 0;
-    let best = 0;
-    for (const [h0, w0] of this.canon.fullRectangles(c)) {
-      const h = Math.min(h0, w0);
-      const w = Math.max(h0, w0);
-      const known = this.rectangles.get(h * 65536 + w);
-      const value = known ?? (h === 1 ? floorLog2(w) + 1 : h === 2 ? grid2RankNumber(w) : h + 1);
-      if (value > best) best = value;
-    }
-    return best;
+    return this.canon.rectangleBound(c, this.rectangleValue);
   }
+
+  /** A proven lower bound of the full h x w rectangle (exact when the search has solved it). */
+  private readonly rectangleValue = (h0: number, w0: number): number => {
+    const h = Math.min(h0, w0);
+    const w = Math.max(h0, w0);
+    const known = this.rectangles.get(h * 65536 + w);
+    return known ?? (h === 1 ? floorLog2(w) + 1 : h === 2 ? grid2RankNumber(w) : h + 1);
+  };
 
   /** Remembers an exact value when the set is a full rectangle, for later lower bounds. */
   private noteIfRectangle(e: MemoEntry, c: Bitset): void {
@@ -142,6 +163,22 @@ export class TreeDepthSearch {
    * which its `choice` is written.
    */
   private entryOf(c: Bitset): { e: MemoEntry; shape: CanonicalShape | undefined } {
+    if (!this.canon) return this.freshEntryOf(c);
+    // Grid shapes: the same cells are met again and again; remember their entry and frame by the raw
+    // set, so the canonical form is worked out once per set (common practice).
+    const h = c.hash();
+    let bucket = this.raw.get(h);
+    if (!bucket) {
+      bucket = [];
+      this.raw.set(h, bucket);
+    }
+    for (const r of bucket) if (r.set.equals(c)) return r;
+    const found = this.freshEntryOf(c);
+    bucket.push({ set: c.clone(), e: found.e, shape: found.shape });
+    return found;
+  }
+
+  private freshEntryOf(c: Bitset): { e: MemoEntry; shape: CanonicalShape | undefined } {
     const shape = this.canon?.canonical(c);
     const key = shape ? shape.key : c;
     const known = this.memo.get(key);
@@ -159,33 +196,59 @@ export class TreeDepthSearch {
 
   /** Decides td(S) <= k for any vertex set S. */
   atMost(s: Bitset, k: number): boolean {
-    for (const c of this.components(s)) if (!this.connectedAtMost(c, k)) return false;
+    const parts = this.components(s).map((c) => ({ c, ...this.entryOf(c) }));
+    // Every component must fit: look for one already known not to before searching any of them.
+    for (const p of parts) if (p.e.lower > k) return false;
+    for (const p of parts) if (p.e.upper > k && !this.connectedPartAtMost(p, k)) return false;
     return true;
   }
 
   /** Decides td(C) <= k for a connected set C, recording what it proves. */
   connectedAtMost(c: Bitset, k: number): boolean {
-    const { e, shape } = this.entryOf(c);
+    return this.connectedPartAtMost({ c, ...this.entryOf(c) }, k);
+  }
+
+  private connectedPartAtMost(part: Part, k: number): boolean {
+    const { c, e, shape } = part;
     if (e.upper <= k) return true;
     if (e.lower > k) return false;
     this.tick();
-    // Try the vertices of highest degree first: they are the likeliest tops of a shallow elimination tree.
+    // For grid shapes, only tops inside every rectangle that bounds C by k can leave C - v within k - 1.
+    const win = this.canon?.topWindow(c, k, this.rectangleValue);
+    if (this.canon && !win) {
+      e.lower = k + 1;
+      this.noteIfRectangle(e, c);
+      return false;
+    }
+    // Try the vertices of highest degree first: they are the likeliest tops of a shallow elimination tree;
+    // in a grid shape, the cells nearest the middle of the window first (a balanced cut).
     const rest = c.clone();
-    for (const v of this.byDegree) {
-      if (!c.has(v)) continue;
+    let tops: ArrayLike<number> = this.byDegree;
+    if (win) {
+      const inside: number[] = [];
+      for (const v of this.byDegree) if (c.has(v) && this.canon!.inWindow(v, win)) inside.push(v);
+      const canon = this.canon!;
+      tops = inside.sort((a, b) => canon.offCentre(a, win) - canon.offCentre(b, win));
+    }
+    for (let i = 0; i < tops.length; i++) {
+      const v = tops[i]!;
+      if (!win && !c.has(v)) continue;
       rest.delete(v);
       const fits = this.atMost(rest, k - 1);
       rest.add(v);
-      if (fits) {
-        e.upper = k;
-        e.choice = shape ? shape.toCanonical(v) : v;
-        this.noteIfRectangle(e, c);
-        return true;
-      }
+      if (fits) return this.fitsWith(part, k, v);
     }
     e.lower = k + 1;
     this.noteIfRectangle(e, c);
     return false;
+  }
+
+  /** Records that the part fits in k labels with v on top. */
+  private fitsWith(part: Part, k: number, v: number): true {
+    part.e.upper = k;
+    part.e.choice = part.shape ? part.shape.toCanonical(v) : v;
+    this.noteIfRectangle(part.e, part.c);
+    return true;
   }
 
   /** The exact tree-depth of a connected set, by deepening k from its lower bound. */
