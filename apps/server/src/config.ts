@@ -31,6 +31,7 @@ const ConfigSchema = z.object({
   CAIRN_MAIL_AFTER_SECONDS: z.coerce.number().min(0).default(30),
   CAIRN_RUN_CONCURRENCY: z.coerce.number().int().min(0).max(64).default(1),
   CAIRN_ENGINE_THREADS: z.coerce.number().int().min(1).max(64).optional(),
+  CAIRN_ENGINE_MEMORY_MB: z.coerce.number().int().min(32).max(1_048_576).optional(),
   CAIRN_UPLOAD_LIMIT_MB: z.coerce.number().min(0.001).max(1024).default(20),
   CAIRN_RATE_LIMIT_PER_MINUTE: z.coerce.number().int().min(1).default(600),
   CAIRN_LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
@@ -60,6 +61,8 @@ export interface Config {
   /** Runs this process works on at once; 0 serves the API only (another process runs the queue). */
   runConcurrency: number;
   engineThreads: number | undefined;
+  /** Heap limit of each engine worker thread, in MiB; a run beyond it fails with out_of_memory. */
+  engineMemoryMb: number | undefined;
   uploadLimitBytes: number;
   rateLimitPerMinute: number;
 }
@@ -105,6 +108,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
     mailAfterSeconds: e.CAIRN_MAIL_AFTER_SECONDS,
     runConcurrency: e.CAIRN_RUN_CONCURRENCY,
     engineThreads: e.CAIRN_ENGINE_THREADS,
+    engineMemoryMb: e.CAIRN_ENGINE_MEMORY_MB,
     uploadLimitBytes: Math.round(e.CAIRN_UPLOAD_LIMIT_MB * 1024 * 1024),
     rateLimitPerMinute: e.CAIRN_RATE_LIMIT_PER_MINUTE,
   };

@@ -1,5 +1,6 @@
 import type { ErrorRequestHandler, RequestHandler } from 'express';
 import type { ApiError } from '@cairn/schema';
+import { isDatabaseUnavailable } from '../db/database-unavailable';
 import type { Logger } from '../logger';
 
 /** An error meant for the client: its status and code reach the response as they are. */
@@ -28,6 +29,10 @@ export function errorHandler(logger: Logger): ErrorRequestHandler {
     if (err instanceof HttpError) {
       status = err.status;
       body = { error: { code: err.code, message: err.message, details: err.details } };
+    } else if (isDatabaseUnavailable(err)) {
+      // PostgreSQL is away (the server reconnects by itself): say so, not "internal error".
+      status = 503;
+      body = { error: { code: 'database_unavailable', message: 'the database does not answer; try again shortly' } };
     } else if (err && typeof err === 'object' && 'type' in err && err.type === 'entity.parse.failed') {
       status = 400;
       body = { error: { code: 'bad_json', message: 'the request body is not valid JSON' } };
@@ -35,7 +40,8 @@ export function errorHandler(logger: Logger): ErrorRequestHandler {
       status = err.status;
       body = { error: { code: 'bad_request', message: err instanceof Error ? err.message : 'bad request' } };
     }
-    if (status >= 500) logger.error({ err }, 'request failed');
+    if (status === 503) logger.warn({ err: (err as Error)?.message }, 'request refused: database unavailable');
+    else if (status >= 500) logger.error({ err }, 'request failed');
     res.status(status).json(body);
   };
 }

@@ -76,7 +76,7 @@ export function startJobs(ctx: ServerContext, settings: QueueSettings = loadQueu
     recovery = setInterval(() => void recover(source), settings.recoverySeconds * 1000);
     if (concurrency === 0) return;
     // One thread per run worker unless configured: a run waiting for a thread would spend its time limit waiting.
-    pool = new EnginePool({ size: ctx.config.engineThreads ?? concurrency });
+    pool = new EnginePool({ size: ctx.config.engineThreads ?? concurrency, ...(ctx.config.engineMemoryMb ? { memoryLimitMb: ctx.config.engineMemoryMb } : {}) });
     const deps: ExecutorDeps = { ctx, source, pool, worker, settings, closing: closing.signal };
     for (let i = 0; i < concurrency; i++) {
       await b.work<RunJobData>(RUN_QUEUE, { pollingIntervalSeconds: settings.pollSeconds, batchSize: 1 }, async ([job]) => {
