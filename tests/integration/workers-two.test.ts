@@ -48,7 +48,7 @@ describe('two worker processes and an API process', () => {
   }, 90_000);
 
   it('streams a run computed by another process as server-sent events from the API process', async () => {
-    const run = await submit({ spec: 'grid:6x6', method: 'exact', timeLimitSeconds: 2 });
+    const run = await submit({ spec: 'grid:9x10', method: 'exact', timeLimitSeconds: 2 });
     const res = await fetch(`${server.url}/api/v1/runs/${run.id}/events`, { headers: { authorization: key } });
     expect(res.headers.get('content-type')).toMatch(/^text\/event-stream/);
     const text = await res.text(); // the server ends the stream after the final event
