@@ -5,7 +5,7 @@ import { sourceConditions } from '../vitest.shared.ts';
 export default defineConfig({
   ...sourceConditions,
   test: {
-    include: ['integration/**/*.test.ts', 'e2e/**/*.test.ts', 'reliability/**/*.test.ts'],
+    include: ['integration/**/*.test.ts', 'e2e/**/*.test.ts', 'reliability/**/*.test.ts', 'security/**/*.test.ts'],
     globalSetup: ['support/global-setup.ts'],
     fileParallelism: false,
     testTimeout: 60_000,

@@ -36,14 +36,17 @@ interface Answer {
   text: string;
 }
 
-async function send(method: string, path: string, init: { body?: BodyInit; headers?: Record<string, string>; auth?: boolean } = {}): Promise<Answer> {
+/** A request body: text, or bytes (a Buffer is bytes too, though TypeScript's fetch types do not say so). */
+type Body = BodyInit | Buffer;
+
+async function send(method: string, path: string, init: { body?: Body; headers?: Record<string, string>; auth?: boolean } = {}): Promise<Answer> {
   const headers: Record<string, string> = { ...(init.auth === false ? {} : { authorization: `Bearer ${key}` }), ...init.headers };
-  const res = await fetch(`${server.url}${path}`, { method, headers, body: init.body ?? null, signal: AbortSignal.timeout(REQUEST_TIMEOUT_MS) });
+  const res = await fetch(`${server.url}${path}`, { method, headers, body: (init.body ?? null) as BodyInit | null, signal: AbortSignal.timeout(REQUEST_TIMEOUT_MS) });
   return { status: res.status, contentType: res.headers.get('content-type') ?? '', text: await res.text() };
 }
 
 const json = (value: unknown) => ({ body: JSON.stringify(value), headers: { 'content-type': 'application/json' } });
-const raw = (body: BodyInit, contentType = 'application/json', extra: Record<string, string> = {}) => ({ body, headers: { 'content-type': contentType, ...extra } });
+const raw = (body: Body, contentType = 'application/json', extra: Record<string, string> = {}) => ({ body, headers: { 'content-type': contentType, ...extra } });
 const nestedArrays = (depth: number) => '['.repeat(depth) + ']'.repeat(depth);
 const nestedObjects = (depth: number, leaf = '1') => '{"spec":'.repeat(depth) + leaf + '}'.repeat(depth);
 const q = (params: Record<string, string>) => new URLSearchParams(params).toString();
@@ -69,10 +72,10 @@ function form(fields: Record<string, string>, file?: { content: BlobPart; name: 
 }
 
 /** Bytes that are no graph file: NULs, invalid UTF-8, a PNG header. */
-function binaryBytes(): Buffer {
+function binaryBytes(): Uint8Array<ArrayBuffer> {
   const b = Buffer.alloc(4096);
   for (let i = 0; i < b.length; i++) b[i] = (i * 131 + 17) % 256;
-  return Buffer.concat([Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]), b]);
+  return Uint8Array.from(Buffer.concat([Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]), b]));
 }
 
 type Case = {

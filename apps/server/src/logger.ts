@@ -7,6 +7,6 @@ export function createLogger(level: string): Logger {
   return pino({
     level,
     base: { service: 'cairn' },
-    redact: { paths: ['req.headers.authorization', 'req.headers.cookie', 'res.headers["set-cookie"]'], censor: '[redacted]' },
+    redact: { paths: ['req.headers.authorization', 'req.headers.cookie', 'req.headers["x-csrf-token"]', 'res.headers["set-cookie"]'], censor: '[redacted]' },
   });
 }
