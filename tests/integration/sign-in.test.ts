@@ -1,3 +1,4 @@
+import { sessionCookieOf, signInThroughLocalProvider } from '../support/local-sign-in';
 import type { ApiKeyCreatedResponse, MeResponse } from '@cairn/schema';
 import { createDataSource, createLogger, Database, loadDemoData } from '@cairn/server';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
@@ -22,24 +23,10 @@ afterAll(async () => {
   await db?.close();
 });
 
-const cookieOf = (res: Response) => res.headers.getSetCookie().map((l) => l.split(';', 1)[0]!).find((p) => p.startsWith('cairn.sid='));
+const cookieOf = sessionCookieOf;
 
 async function signIn(login: string, next?: string): Promise<{ cookie: string; landing: string; me: MeResponse }> {
-  const start = await fetch(`${server.url}/api/v1/auth/github${next ? `?next=${encodeURIComponent(next)}` : ''}`, { redirect: 'manual' });
-  expect(start.status).toBe(302);
-  const startCookie = cookieOf(start)!;
-  const authorizeUrl = start.headers.get('location')!;
-  const page = await (await fetch(authorizeUrl)).text();
-  const form = page.split('</form>').find((f) => f.includes(`data-login="${login}"`));
-  expect(form, `the provider offers ${login}`).toBeDefined();
-  const fields = new URLSearchParams();
-  for (const m of form!.matchAll(/<input type="hidden" name="([^"]+)" value="([^"]*)">/g)) fields.set(m[1]!, m[2]!.replaceAll('&amp;', '&'));
-  const chosen = await fetch(new URL('/login/oauth/authorize', authorizeUrl), { method: 'POST', body: fields, redirect: 'manual' });
-  expect(chosen.status).toBe(302);
-  const callback = chosen.headers.get('location')!;
-  expect(callback.startsWith(`${server.url}/api/v1/auth/github/callback?`)).toBe(true);
-  const done = await fetch(callback, { headers: { cookie: startCookie }, redirect: 'manual' });
-  expect(done.status, await done.clone().text()).toBe(302);
+  const done = await signInThroughLocalProvider(server.url, login, next);
   const cookie = cookieOf(done)!;
   const me = (await (await fetch(`${server.url}/api/v1/me`, { headers: { cookie } })).json()) as MeResponse;
   return { cookie, landing: done.headers.get('location')!, me };

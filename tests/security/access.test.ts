@@ -8,6 +8,7 @@
 //    link is gone once it is private again;
 //  - key secrets, session cookies and the session secret never appear in answers after a key's creation,
 //    nor in the server's log output.
+import { signInThroughLocalProvider } from '../support/local-sign-in';
 import { createHmac, randomBytes, randomUUID } from 'node:crypto';
 import type { ApiKeyCreatedResponse, MeResponse, RunList, RunView } from '@cairn/schema';
 import { createDataSource, createLogger, Database, loadDemoData } from '@cairn/server';
@@ -47,19 +48,7 @@ const setCookieLine = (res: Response) => res.headers.getSetCookie().find((l) => 
 
 /** Signs in through the local provider the way a browser does (as tests/integration/sign-in.test.ts). */
 async function signIn(login: string): Promise<Session> {
-  const start = await fetch(`${server.url}/api/v1/auth/github`, { redirect: 'manual' });
-  expect(start.status).toBe(302);
-  const startCookie = cookieOf(start)!;
-  const authorizeUrl = start.headers.get('location')!;
-  const page = await (await fetch(authorizeUrl)).text();
-  const form = page.split('</form>').find((f) => f.includes(`data-login="${login}"`));
-  expect(form, `the provider offers ${login}`).toBeDefined();
-  const fields = new URLSearchParams();
-  for (const m of form!.matchAll(/<input type="hidden" name="([^"]+)" value="([^"]*)">/g)) fields.set(m[1]!, m[2]!.replaceAll('&amp;', '&'));
-  const chosen = await fetch(new URL('/login/oauth/authorize', authorizeUrl), { method: 'POST', body: fields, redirect: 'manual' });
-  expect(chosen.status).toBe(302);
-  const done = await fetch(chosen.headers.get('location')!, { headers: { cookie: startCookie }, redirect: 'manual' });
-  expect(done.status, await done.clone().text()).toBe(302);
+  const done = await signInThroughLocalProvider(server.url, login);
   const line = setCookieLine(done)!;
   expect(line).toMatch(/HttpOnly/i);
   expect(line).toMatch(/SameSite=Lax/i);
