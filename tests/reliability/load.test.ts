@@ -114,7 +114,7 @@ describe(`load on the built server (${FORM}: ${SECONDS} s a case, ${CONNECTIONS}
     const worker = await startBuiltServer({ CAIRN_RUN_CONCURRENCY: '1', CAIRN_ENGINE_THREADS: '1' });
     try {
       const ids: string[] = [];
-      for (const spec of ['grid:4x4', 'grid:3x5', 'path:16', 'complete:5', 'staircase:4', 'cycle:9']) {
+      for (const spec of ['grid:2x29', 'grid:3x7', 'path:613', 'complete:7', 'staircase:3', 'cycle:37']) {
         const res = await api<RunView>(worker.url, 'POST', '/api/v1/runs', authorization, { spec, visibility: 'public', timeLimitSeconds: 30 });
         expect(res.status, JSON.stringify(res.body)).toBeLessThan(300);
         ids.push(res.body.id);
