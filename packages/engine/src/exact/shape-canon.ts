@@ -91,16 +91,13 @@ export class ShapeCanon {
   }
 
   /**
-   * A lower bound of td(set) from the rectangles of its bounding box: for a rectangle R with a proven
-   * value(R), td(set) >= td(set ∩ R) >= value(R) - |R \ set|, since td never grows on subgraphs and
-   * removing one vertex lowers it by at most one (DESIGN, "Monotonicity"). With R full this is the plain
-   * rectangle bound; a rectangle with a few cells missing often does better.
+   * The set's cells counted over its bounding box: prefix[r * stride + c] = cells of the set in rows < r,
+   * columns < c of the box (a 2-D prefix sum), so any window's count costs four reads.
    */
-  rectangleBound(set: Bitset, value: (h: number, w: number) => number): number {
+  private prefixCounts(set: Bitset): { r0: number; c0: number; H: number; W: number; stride: number; prefix: Int32Array } {
     const { r0, r1, c0, c1 } = this.boundingBox(set.toArray());
     const H = r1 - r0 + 1;
     const W = c1 - c0 + 1;
-    // prefix[(r) * (W + 1) + c] = cells of the set in rows < r, columns < c of the box.
     const stride = W + 1;
     const prefix = new Int32Array((H + 1) * stride);
     for (let r = 0; r < H; r++) {
@@ -111,6 +108,17 @@ export class ShapeCanon {
         prefix[(r + 1) * stride + c + 1] = prefix[r * stride + c + 1]! + run;
       }
     }
+    return { r0, c0, H, W, stride, prefix };
+  }
+
+  /**
+   * A lower bound of td(set) from the rectangles of its bounding box: for a rectangle R with a proven
+   * value(R), td(set) >= td(set ∩ R) >= value(R) - |R \ set|, since td never grows on subgraphs and
+   * removing one vertex lowers it by at most one (DESIGN, "Monotonicity"). With R full this is the plain
+   * rectangle bound; a rectangle with a few cells missing often does better.
+   */
+  rectangleBound(set: Bitset, value: (h: number, w: number) => number): number {
+    const { r0, c0, H, W, stride, prefix } = this.prefixCounts(set);
     let best = 0;
     for (let h = 1; h <= H; h++) {
       for (let w = 1; w <= W; w++) {
@@ -139,19 +147,7 @@ export class ShapeCanon {
    * when no top can do.
    */
   topWindow(set: Bitset, k: number, value: (h: number, w: number) => number): [number, number, number, number] | undefined {
-    const { r0, r1, c0, c1 } = this.boundingBox(set.toArray());
-    const H = r1 - r0 + 1;
-    const W = c1 - c0 + 1;
-    const stride = W + 1;
-    const prefix = new Int32Array((H + 1) * stride);
-    for (let r = 0; r < H; r++) {
-      let run = 0;
-      for (let c = 0; c < W; c++) {
-        const v = this.vertexAt[(r + r0) * this.cols + c + c0]!;
-        if (v >= 0 && set.has(v)) run++;
-        prefix[(r + 1) * stride + c + 1] = prefix[r * stride + c + 1]! + run;
-      }
-    }
+    const { r0, c0, H, W, stride, prefix } = this.prefixCounts(set);
     let lo = 0;
     let hi = H - 1;
     let left = 0;
