@@ -23,6 +23,12 @@ export class ShapeCanon {
   private readonly col: Int32Array;
   private readonly vertexAt: Int32Array;
   private readonly cols: number;
+  /** Scratch: the members of the set last scanned, and its bounding box [r0, r1, c0, c1]. */
+  private readonly members: Int32Array;
+  private readonly box = new Int32Array(4);
+  /** Scratch candidates of canonical(): the one being built and the least so far. */
+  private candidate = new Uint32Array(0);
+  private least = new Uint32Array(0);
 
   static applies(g: Graph): boolean {
     const kind = g.family?.kind;
@@ -36,6 +42,7 @@ export class ShapeCanon {
     this.row = new Int32Array(n);
     this.col = new Int32Array(n);
     this.vertexAt = new Int32Array(layout.rows * layout.cols).fill(-1);
+    this.members = new Int32Array(n);
     for (let v = 0; v < n; v++) {
       const cell = layout.cells[v]!;
       this.row[v] = Math.floor(cell / layout.cols);
@@ -44,21 +51,46 @@ export class ShapeCanon {
     }
   }
 
-  /** The first and last row and column of the cells of `members`. */
-  private boundingBox(members: number[]): { r0: number; r1: number; c0: number; c1: number } {
+  /**
+   * Lists the set's members into `this.members` (returned count) and its bounding box into `this.box`
+   * (first and last row and column): scratch arrays, as this runs for every set the search meets.
+   */
+  private scan(set: Bitset): number {
     let r0 = Infinity;
     let r1 = -1;
     let c0 = Infinity;
     let c1 = -1;
-    for (const v of members) {
-      const r = this.row[v]!;
-      const c = this.col[v]!;
-      if (r < r0) r0 = r;
-      if (r > r1) r1 = r;
-      if (c < c0) c0 = c;
-      if (c > c1) c1 = c;
+    let count = 0;
+    const words = set.words;
+    const members = this.members;
+    for (let i = 0; i < words.length; i++) {
+      let w = words[i]!;
+      while (w !== 0) {
+        const low = w & -w;
+        const v = (i << 5) + (31 - Math.clz32(low));
+        w ^= low;
+        members[count++] = v;
+        const r = this.row[v]!;
+        const c = this.col[v]!;
+        if (r < r0) r0 = r;
+        if (r > r1) r1 = r;
+        if (c < c0) c0 = c;
+        if (c > c1) c1 = c;
+      }
     }
-    return { r0, r1, c0, c1 };
+    const box = this.box;
+    box[0] = r0;
+    box[1] = r1;
+    box[2] = c0;
+    box[3] = c1;
+    return count;
+  }
+
+  /** The first and last row and column of the set's cells. */
+  private boundingBox(set: Bitset): { r0: number; r1: number; c0: number; c1: number } {
+    this.scan(set);
+    const box = this.box;
+    return { r0: box[0]!, r1: box[1]!, c0: box[2]!, c1: box[3]! };
   }
 
   /**
@@ -66,7 +98,7 @@ export class ShapeCanon {
    * [height, width] pairs: the histogram-and-stack method, one pass over the bounding box per row.
    */
   fullRectangles(set: Bitset): [number, number][] {
-    const { r0, r1, c0, c1 } = this.boundingBox(set.toArray());
+    const { r0, r1, c0, c1 } = this.boundingBox(set);
     const w = c1 - c0 + 1;
     const heights = new Int32Array(w);
     const out: [number, number][] = [];
@@ -95,7 +127,7 @@ export class ShapeCanon {
    * columns < c of the box (a 2-D prefix sum), so any window's count costs four reads.
    */
   private prefixCounts(set: Bitset): { r0: number; c0: number; H: number; W: number; stride: number; prefix: Int32Array } {
-    const { r0, r1, c0, c1 } = this.boundingBox(set.toArray());
+    const { r0, r1, c0, c1 } = this.boundingBox(set);
     const H = r1 - r0 + 1;
     const W = c1 - c0 + 1;
     const stride = W + 1;
@@ -186,31 +218,43 @@ export class ShapeCanon {
   }
 
   canonical(set: Bitset): CanonicalShape {
-    const members = set.toArray();
-    const { r0, r1, c0, c1 } = this.boundingBox(members);
-    const h = r1 - r0 + 1;
-    const w = c1 - c0 + 1;
-    let best: Uint32Array | undefined;
-    let bestT = 0;
+    const count = this.scan(set);
+    const members = this.members;
+    const box = this.box;
+    const r0 = box[0]!;
+    const c0 = box[2]!;
+    const h = box[1]! - r0 + 1;
+    const w = box[3]! - c0 + 1;
     const words = (h * w + 31) >>> 5;
+    if (this.candidate.length < 1 + words) {
+      this.candidate = new Uint32Array(1 + words);
+      this.least = new Uint32Array(1 + words);
+    }
+    let cand = this.candidate;
+    let best = this.least;
+    let bestT = -1;
     // The key starts with the box's dimensions, so with h < w only the four symmetries keeping the box
     // upright can be least, with h > w only the four turning it; a square needs all eight.
     const tFrom = h > w ? 4 : 0;
     const tTo = h < w ? 4 : 8;
     for (let t = tFrom; t < tTo; t++) {
-      const [H, W] = t < 4 ? [h, w] : [w, h];
-      const cand = new Uint32Array(1 + words);
-      cand[0] = (H << 16) | W;
-      for (const v of members) {
+      cand.fill(0, 0, 1 + words);
+      cand[0] = t < 4 ? (h << 16) | w : (w << 16) | h;
+      for (let j = 0; j < count; j++) {
+        const v = members[j]!;
         const i = transformIndex(t, this.row[v]! - r0, this.col[v]! - c0, h, w);
         cand[1 + (i >>> 5)]! |= 1 << (i & 31);
       }
-      if (!best || lessThan(cand, best)) {
+      if (bestT < 0 || lessThan(cand, best, 1 + words)) {
+        const swap = best;
         best = cand;
+        cand = swap;
         bestT = t;
       }
     }
-    return new Frame(new Bitset(32 * best!.length, best), bestT, r0, c0, h, w, this.row, this.col, this.vertexAt, this.cols);
+    this.candidate = cand;
+    this.least = best;
+    return new Frame(new Bitset(32 * (1 + words), best.slice(0, 1 + words)), bestT, r0, c0, h, w, this.row, this.col, this.vertexAt, this.cols);
   }
 }
 
@@ -268,8 +312,7 @@ function inverse(t: number, cr: number, cc: number, h: number, w: number): [numb
   }
 }
 
-function lessThan(a: Uint32Array, b: Uint32Array): boolean {
-  if (a.length !== b.length) return a.length < b.length;
-  for (let i = 0; i < a.length; i++) if (a[i] !== b[i]) return a[i]! < b[i]!;
+function lessThan(a: Uint32Array, b: Uint32Array, length: number): boolean {
+  for (let i = 0; i < length; i++) if (a[i] !== b[i]) return a[i]! < b[i]!;
   return false;
 }

@@ -2,6 +2,7 @@ import { floorLog2, grid2RankNumber } from '../formulas/closed-forms';
 import { Bitset } from '../graph/bitset';
 import type { Graph } from '../graph/graph';
 import { BitsetMemo, type MemoEntry } from './bitset-memo';
+import { CutVertices } from './cut-vertices';
 import { SearchStopped } from './search-stop';
 import { ShapeCanon, type CanonicalShape } from './shape-canon';
 
@@ -49,24 +50,47 @@ export class TreeDepthSearch {
   ) {
     this.n = g.vertexCount;
     this.adj = Array.from({ length: this.n }, (_, v) => Bitset.of(this.n, g.neighbours(v)));
+    this.rest = new Bitset(this.n);
+    this.frontier = new Bitset(this.n);
+    this.grown = new Bitset(this.n);
+    this.cuts = new CutVertices(g.offsets, g.targets);
     this.canon = ShapeCanon.applies(g) ? new ShapeCanon(g) : undefined;
     this.byDegree = Uint32Array.from({ length: this.n }, (_, v) => v).sort((a, b) => g.degree(b) - g.degree(a) || a - b);
   }
 
+  /** Scratch sets of components(): what is left to place, the last layer reached and the next one. */
+  private readonly rest: Bitset;
+  private readonly frontier: Bitset;
+  private readonly grown: Bitset;
+  private readonly cuts: CutVertices;
+
   /** The connected components of S, largest first. */
   components(s: Bitset): Bitset[] {
-    const rest = s.clone();
+    const rest = this.rest.copyFrom(s);
     const out: Bitset[] = [];
-    const frontier = new Bitset(this.n);
-    const grown = new Bitset(this.n);
+    const frontier = this.frontier;
+    const grown = this.grown;
+    const fw = frontier.words;
+    const gw = grown.words;
+    const adj = this.adj;
     for (let start = rest.first(); start >= 0; start = rest.first()) {
       const comp = new Bitset(this.n).add(start);
       frontier.clear().add(start);
       rest.delete(start);
-      while (!frontier.isEmpty()) {
-        grown.clear();
-        frontier.forEach((v) => grown.orWith(this.adj[v]!));
+      for (;;) {
+        // One breadth-first layer: the neighbours of the frontier still left (word loops, no closures).
+        gw.fill(0);
+        for (let i = 0; i < fw.length; i++) {
+          let w = fw[i]!;
+          while (w !== 0) {
+            const low = w & -w;
+            w ^= low;
+            const aw = adj[(i << 5) + (31 - Math.clz32(low))]!.words;
+            for (let j = 0; j < gw.length; j++) gw[j]! |= aw[j]!;
+          }
+        }
         grown.andWith(rest);
+        if (grown.isEmpty()) break;
         rest.andNotWith(grown);
         comp.orWith(grown);
         frontier.copyFrom(grown);
@@ -230,11 +254,13 @@ export class TreeDepthSearch {
       const canon = this.canon!;
       tops = inside.sort((a, b) => canon.offCentre(a, win) - canon.offCentre(b, win));
     }
+    // Which tops leave C in one piece: those need no component search (most cells of a grid shape).
+    const cut = this.cuts.find(c, c.first(), new Bitset(this.n));
     for (let i = 0; i < tops.length; i++) {
       const v = tops[i]!;
       if (!win && !c.has(v)) continue;
       rest.delete(v);
-      const fits = this.atMost(rest, k - 1);
+      const fits = cut.has(v) ? this.atMost(rest, k - 1) : this.connectedAtMost(rest, k - 1);
       rest.add(v);
       if (fits) return this.fitsWith(part, k, v);
     }
