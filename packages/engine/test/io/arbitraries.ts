@@ -1,7 +1,7 @@
 // Generators and helpers shared by the io tests.
 import { readFileSync } from 'node:fs';
 import fc from 'fast-check';
-import { EngineError, type Graph, type GridLayout, graphFromEdges, ParseError } from '../../src/index';
+import { type Graph, type GridLayout, graphFromEdges, ParseError } from '../../src/index';
 
 /** Random simple graphs: up to 30 vertices, up to 80 random pairs (loops and repeats are merged away). */
 export const arbitraryGraph: fc.Arbitrary<Graph> = fc.integer({ min: 0, max: 30 }).chain((n) =>
@@ -54,17 +54,6 @@ export function parseErrorOf(read: () => unknown): ParseError {
 export function placeOf(read: () => unknown): { format: string; line: number; column: number } {
   const { format, line, column } = parseErrorOf(read);
   return { format, line, column };
-}
-
-/** True when a read either returned or failed the way readers are allowed to fail. */
-export function failsCleanly(read: () => unknown): boolean {
-  try {
-    read();
-    return true;
-  } catch (error) {
-    if (error instanceof EngineError) return true;
-    throw error;
-  }
 }
 
 export function fixture(name: string): string {
