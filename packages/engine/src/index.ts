@@ -66,6 +66,7 @@ export type { BestUpperBound } from './bounds/best-upper-bound';
 export { exactTreeDepth } from './exact/exact-tree-depth';
 export type { ExactOptions, ExactProgress, ExactResult } from './exact/exact-tree-depth';
 export { TreeDepthSearch } from './exact/tree-depth-search';
+export type { StopReason } from './exact/search-stop';
 export { gridLowerBounds } from './bounds/grid-lower-bounds';
 export type { GridLowerBound } from './bounds/grid-lower-bounds';
 export { boundsTable } from './bounds/bounds-table';

@@ -78,6 +78,17 @@ describe('exactTreeDepth', () => {
     expect(timed.lower).toBeLessThanOrEqual(timed.upper);
   });
 
+  it('stops at its memory budget with a valid interval, and a larger budget gets further', () => {
+    const g = gridGraph(9, 9);
+    const tight = exactTreeDepth(g, { memoryLimitMb: 2, timeLimitMs: 60_000 });
+    expect(tight).toMatchObject({ status: 'stopped', stopReason: 'memory-limit' });
+    expect(verifyRanking(g, tight.labels)).toMatchObject({ valid: true, maxLabel: tight.upper });
+    const roomier = exactTreeDepth(g, { memoryLimitMb: 8, timeLimitMs: 60_000 });
+    expect(roomier.stopReason).toBe('memory-limit');
+    expect(roomier.memoSize).toBeGreaterThan(tight.memoSize);
+    expect(roomier.lower).toBeGreaterThanOrEqual(tight.lower);
+  });
+
   it('reports progress with the interval closing in', () => {
     const seen: [number, number][] = [];
     const r = exactTreeDepth(gridGraph(3, 5), { onProgress: (p) => seen.push([p.lower, p.upper]) });

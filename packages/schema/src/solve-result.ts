@@ -33,7 +33,7 @@ export const SolveResult = z.object({
     elapsedMs: z.number().min(0),
     nodes: z.number().int().min(0),
     memoSize: z.number().int().min(0),
-    stopReason: z.enum(['aborted', 'time-limit']).nullable(),
+    stopReason: z.enum(['aborted', 'time-limit', 'memory-limit']).nullable(),
   }),
 });
 export type SolveResult = z.infer<typeof SolveResult>;

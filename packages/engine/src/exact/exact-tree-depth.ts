@@ -1,7 +1,7 @@
 import { bestUpperBound } from '../bounds/best-upper-bound';
 import { Bitset } from '../graph/bitset';
 import type { Graph } from '../graph/graph';
-import { SearchStopped } from './search-stop';
+import { SearchStopped, type StopReason } from './search-stop';
 import { TreeDepthSearch } from './tree-depth-search';
 
 export interface ExactProgress {
@@ -22,12 +22,14 @@ export interface ExactOptions {
   initial?: { labels: Int32Array; value: number };
   /** A lower bound already proven elsewhere, where deepening may start. */
   lower?: number;
+  /** Memory the search's tables may take, in MiB; it stops with its interval there ('memory-limit'). */
+  memoryLimitMb?: number;
 }
 
 export interface ExactResult {
   /** 'exact' when lower = upper was proven; 'stopped' when a limit came first. */
   status: 'exact' | 'stopped';
-  stopReason?: 'aborted' | 'time-limit';
+  stopReason?: StopReason;
   lower: number;
   upper: number;
   /** The best ranking found: it uses `upper` labels and passes verifyRanking. */
@@ -52,6 +54,7 @@ export function exactTreeDepth(g: Graph, options: ExactOptions = {}): ExactResul
     signal: options.signal,
     stopFlag: options.stopFlag,
     deadline: options.timeLimitMs === undefined ? undefined : started + options.timeLimitMs,
+    memoryBytes: options.memoryLimitMb === undefined ? undefined : options.memoryLimitMb * 2 ** 20,
   });
   const all = Bitset.full(n);
   let lower = n === 0 ? 0 : Math.max(1, Math.min(options.lower ?? 1, upper));

@@ -1,14 +1,18 @@
 import { Bitset } from '../graph/bitset';
 import type { Graph } from '../graph/graph';
 
-/** A vertex set of a grid shape seen in its canonical frame. */
-export interface CanonicalShape {
-  /** Dimensions in word 0, then the cells of the canonical bounding box, row-major. */
-  key: Bitset;
+/** How a vertex set of a grid shape maps to its canonical frame and back. */
+export interface CellFrame {
   /** The canonical cell index of vertex v (v in the set). */
   toCanonical(v: number): number;
   /** The vertex of the set at canonical cell index i. */
   fromCanonical(i: number): number;
+}
+
+/** A vertex set of a grid shape seen in its canonical frame, with its key. */
+export interface CanonicalShape extends CellFrame {
+  /** Dimensions in word 0, then the cells of the canonical bounding box, row-major. */
+  key: Bitset;
 }
 
 /**
@@ -29,6 +33,8 @@ export class ShapeCanon {
   /** Scratch candidates of canonical(): the one being built and the least so far. */
   private candidate = new Uint32Array(0);
   private least = new Uint32Array(0);
+  /** What the last canonicalKey found: [symmetry, r0, c0, h, w]. */
+  readonly lastFrame = new Int32Array(5);
 
   static applies(g: Graph): boolean {
     const kind = g.family?.kind;
@@ -217,7 +223,20 @@ export class ShapeCanon {
     return r >= win[0] && r <= win[1] && c >= win[2] && c <= win[3];
   }
 
+  /** The canonical form of a set, as a key and a frame. */
   canonical(set: Bitset): CanonicalShape {
+    const length = this.canonicalKey(set);
+    const f = this.lastFrame;
+    const frame = this.frame(f[0]!, f[1]!, f[2]!, f[3]!, f[4]!);
+    return Object.assign(frame, { key: new Bitset(32 * length, this.least.slice(0, length)) });
+  }
+
+  /**
+   * The canonical key of a set, written into `keyWords` (scratch, valid until the next call; its length
+   * is returned), with the symmetry and box that map the set there in `lastFrame` ([t, r0, c0, h, w],
+   * for frame()). No allocation: the search calls this for every new set it meets.
+   */
+  canonicalKey(set: Bitset): number {
     const count = this.scan(set);
     const members = this.members;
     const box = this.box;
@@ -254,14 +273,29 @@ export class ShapeCanon {
     }
     this.candidate = cand;
     this.least = best;
-    return new Frame(new Bitset(32 * (1 + words), best.slice(0, 1 + words)), bestT, r0, c0, h, w, this.row, this.col, this.vertexAt, this.cols);
+    const f = this.lastFrame;
+    f[0] = bestT;
+    f[1] = r0;
+    f[2] = c0;
+    f[3] = h;
+    f[4] = w;
+    return 1 + words;
+  }
+
+  /** The key canonicalKey wrote last. */
+  get keyWords(): Uint32Array {
+    return this.least;
+  }
+
+  /** The frame of symmetry t over the h x w box at (r0, c0), as canonicalKey reported it. */
+  frame(t: number, r0: number, c0: number, h: number, w: number): CellFrame {
+    return new Frame(t, r0, c0, h, w, this.row, this.col, this.vertexAt, this.cols);
   }
 }
 
-/** A set's canonical frame: its key and the symmetry and offset that map it there (no closures kept). */
-class Frame implements CanonicalShape {
+/** A set's canonical frame: the symmetry and offset that map it there (no closures kept). */
+class Frame implements CellFrame {
   constructor(
-    readonly key: Bitset,
     private readonly t: number,
     private readonly r0: number,
     private readonly c0: number,

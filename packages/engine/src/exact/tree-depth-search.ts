@@ -1,10 +1,11 @@
 import { floorLog2, grid2RankNumber } from '../formulas/closed-forms';
 import { Bitset } from '../graph/bitset';
 import type { Graph } from '../graph/graph';
-import { BitsetMemo, type MemoEntry } from './bitset-memo';
 import { CutVertices } from './cut-vertices';
 import { SearchStopped } from './search-stop';
-import { ShapeCanon, type CanonicalShape } from './shape-canon';
+import { SearchMemo } from './search-memo';
+import { grown, SetTable } from './set-table';
+import { ShapeCanon, type CellFrame } from './shape-canon';
 
 export interface SearchLimits {
   signal?: AbortSignal | undefined;
@@ -12,13 +13,18 @@ export interface SearchLimits {
   stopFlag?: Int32Array | undefined;
   /** Wall-clock deadline (Date.now() milliseconds). */
   deadline?: number | undefined;
+  /**
+   * Bytes the search's tables may hold: it stops (reason 'memory-limit', its proven interval kept) once
+   * they hold half of it, as each table doubles when it grows.
+   */
+  memoryBytes?: number | undefined;
 }
 
-/** One component of a vertex set, with its memo entry and (for grid shapes) its canonical frame. */
+/** One component of a vertex set, with its memo entry and (for grid shapes) its raw-set entry. */
 interface Part {
   c: Bitset;
-  e: MemoEntry;
-  shape: CanonicalShape | undefined;
+  e: number;
+  raw: number;
 }
 
 /**
@@ -31,10 +37,17 @@ interface Part {
  * it must lie in every rectangle that already bounds S by k (see ShapeCanon.topWindow).
  */
 export class TreeDepthSearch {
-  readonly memo = new BitsetMemo();
+  readonly memo = new SearchMemo();
   nodes = 0;
-  /** Grid shapes: raw vertex set -> its entry and canonical frame (see entryOf). */
-  private readonly raw = new Map<number, { set: Bitset; e: MemoEntry; shape: CanonicalShape | undefined }[]>();
+  /**
+   * Grid shapes: raw vertex set -> its memo entry and canonical frame (see entryOf), the frame as the
+   * symmetry and box of ShapeCanon.frame.
+   */
+  private readonly raw = new SetTable();
+  private rawEntry = new Int32Array(this.raw.capacity);
+  private rawFrame = new Int32Array(5 * this.raw.capacity);
+  /** The raw-set entry of the set entryOf looked up last (-1 for graphs that are not grid shapes). */
+  private lastRaw = -1;
   private readonly n: number;
   private readonly adj: Bitset[];
   /** All vertices, highest degree first: the order in which tops are tried. */
@@ -168,79 +181,112 @@ export class TreeDepthSearch {
   };
 
   /** Remembers an exact value when the set is a full rectangle, for later lower bounds. */
-  private noteIfRectangle(e: MemoEntry, c: Bitset): void {
-    if (!this.canon || e.lower !== e.upper) return;
-    const dims = e.set.words[0]!; // canonical key: height << 16 | width
+  private noteIfRectangle(e: number, c: Bitset): void {
+    if (!this.canon || this.memo.lower(e) !== this.memo.upper(e)) return;
+    const dims = this.memo.table.word(e, 0); // canonical key: height << 16 | width
     const h = dims >>> 16;
     const w = dims & 0xffff;
-    if (c.popcount() === h * w) this.rectangles.set(Math.min(h, w) * 65536 + Math.max(h, w), e.upper);
+    if (c.popcount() === h * w) this.rectangles.set(Math.min(h, w) * 65536 + Math.max(h, w), this.memo.upper(e));
   }
 
   private tick(): void {
     if ((++this.nodes & 15) !== 0) return;
     if (this.limits.signal?.aborted || (this.limits.stopFlag && Atomics.load(this.limits.stopFlag, 0) !== 0)) throw new SearchStopped('aborted');
     if (this.limits.deadline !== undefined && Date.now() > this.limits.deadline) throw new SearchStopped('time-limit');
+    if (this.limits.memoryBytes !== undefined && (this.nodes & 1023) === 0 && 2 * this.bytes > this.limits.memoryBytes) throw new SearchStopped('memory-limit');
+  }
+
+  /** Bytes held by the search's tables (the memo and the raw-set table). */
+  get bytes(): number {
+    return this.memo.bytes + this.raw.bytes + this.rawEntry.byteLength + this.rawFrame.byteLength;
   }
 
   /**
-   * The memo entry of a connected set (created with its cheap bounds), and for grid shapes the frame in
-   * which its `choice` is written.
+   * The memo entry of a connected set (created with its cheap bounds); for grid shapes lastRaw is then
+   * the set's raw entry, whose frame maps `choice` back (see frameOf).
    */
-  private entryOf(c: Bitset): { e: MemoEntry; shape: CanonicalShape | undefined } {
-    if (!this.canon) return this.freshEntryOf(c);
+  private entryOf(c: Bitset): number {
+    const words = c.words;
+    const hash = SetTable.hash(words, words.length);
+    if (!this.canon) {
+      this.lastRaw = -1;
+      const known = this.memo.find(words, words.length, hash);
+      if (known >= 0) return known;
+      const size = c.popcount();
+      return this.memo.add(words, words.length, hash, this.cheapLowerBound(c, size), size);
+    }
     // Grid shapes: the same cells are met again and again; remember their entry and frame by the raw
     // set, so the canonical form is worked out once per set (common practice).
-    const h = c.hash();
-    let bucket = this.raw.get(h);
-    if (!bucket) {
-      bucket = [];
-      this.raw.set(h, bucket);
+    const seen = this.raw.find(words, words.length, hash);
+    if (seen >= 0) {
+      this.lastRaw = seen;
+      return this.rawEntry[seen]!;
     }
-    for (const r of bucket) if (r.set.equals(c)) return r;
-    const found = this.freshEntryOf(c);
-    bucket.push({ set: c.clone(), e: found.e, shape: found.shape });
-    return found;
+    const canon = this.canon;
+    const length = canon.canonicalKey(c);
+    const frame = canon.lastFrame.slice();
+    const keyHash = SetTable.hash(canon.keyWords, length);
+    let e = this.memo.find(canon.keyWords, length, keyHash);
+    if (e < 0) {
+      const size = c.popcount();
+      const lower = this.cheapLowerBound(c, size); // does not touch the key canonicalKey left
+      e = this.memo.add(canon.keyWords, length, keyHash, lower, size);
+    }
+    const r = this.raw.add(words, words.length, hash);
+    if (this.rawEntry.length < this.raw.capacity) {
+      this.rawEntry = grown(this.rawEntry, new Int32Array(this.raw.capacity));
+      this.rawFrame = grown(this.rawFrame, new Int32Array(5 * this.raw.capacity));
+    }
+    this.rawEntry[r] = e;
+    this.rawFrame.set(frame, 5 * r);
+    this.lastRaw = r;
+    return e;
   }
 
-  private freshEntryOf(c: Bitset): { e: MemoEntry; shape: CanonicalShape | undefined } {
-    const shape = this.canon?.canonical(c);
-    const key = shape ? shape.key : c;
-    const known = this.memo.get(key);
-    if (known) return { e: known, shape };
-    const size = c.popcount();
-    return { e: this.memo.entry(key, this.cheapLowerBound(c, size), size, -1), shape };
+  /** A part: a connected set with its entries. */
+  private partOf(c: Bitset): Part {
+    const e = this.entryOf(c);
+    return { c, e, raw: this.lastRaw };
+  }
+
+  /** The frame in which the choice of a grid shape's raw entry is written. */
+  private frameOf(raw: number): CellFrame {
+    const f = this.rawFrame;
+    const at = 5 * raw;
+    return this.canon!.frame(f[at]!, f[at + 1]!, f[at + 2]!, f[at + 3]!, f[at + 4]!);
   }
 
   /** The best lower bound proven so far for a vertex set: the largest over its components. */
   provenLower(s: Bitset): number {
     let best = 0;
-    for (const c of this.components(s)) best = Math.max(best, this.entryOf(c).e.lower);
+    for (const c of this.components(s)) best = Math.max(best, this.memo.lower(this.entryOf(c)));
     return best;
   }
 
   /** Decides td(S) <= k for any vertex set S. */
   atMost(s: Bitset, k: number): boolean {
-    const parts = this.components(s).map((c) => ({ c, ...this.entryOf(c) }));
+    const parts = this.components(s).map((c) => this.partOf(c));
     // Every component must fit: look for one already known not to before searching any of them.
-    for (const p of parts) if (p.e.lower > k) return false;
-    for (const p of parts) if (p.e.upper > k && !this.connectedPartAtMost(p, k)) return false;
+    for (const p of parts) if (this.memo.lower(p.e) > k) return false;
+    for (const p of parts) if (this.memo.upper(p.e) > k && !this.connectedPartAtMost(p, k)) return false;
     return true;
   }
 
   /** Decides td(C) <= k for a connected set C, recording what it proves. */
   connectedAtMost(c: Bitset, k: number): boolean {
-    return this.connectedPartAtMost({ c, ...this.entryOf(c) }, k);
+    return this.connectedPartAtMost(this.partOf(c), k);
   }
 
   private connectedPartAtMost(part: Part, k: number): boolean {
-    const { c, e, shape } = part;
-    if (e.upper <= k) return true;
-    if (e.lower > k) return false;
+    const { c, e } = part;
+    const memo = this.memo;
+    if (memo.upper(e) <= k) return true;
+    if (memo.lower(e) > k) return false;
     this.tick();
     // For grid shapes, only tops inside every rectangle that bounds C by k can leave C - v within k - 1.
     const win = this.canon?.topWindow(c, k, this.rectangleValue);
     if (this.canon && !win) {
-      e.lower = k + 1;
+      memo.setLower(e, k + 1);
       this.noteIfRectangle(e, c);
       return false;
     }
@@ -264,24 +310,23 @@ export class TreeDepthSearch {
       rest.add(v);
       if (fits) return this.fitsWith(part, k, v);
     }
-    e.lower = k + 1;
+    memo.setLower(e, k + 1);
     this.noteIfRectangle(e, c);
     return false;
   }
 
   /** Records that the part fits in k labels with v on top. */
   private fitsWith(part: Part, k: number, v: number): true {
-    part.e.upper = k;
-    part.e.choice = part.shape ? part.shape.toCanonical(v) : v;
+    this.memo.setUpper(part.e, k, part.raw >= 0 ? this.frameOf(part.raw).toCanonical(v) : v);
     this.noteIfRectangle(part.e, part.c);
     return true;
   }
 
   /** The exact tree-depth of a connected set, by deepening k from its lower bound. */
   treeDepth(c: Bitset): number {
-    const { e } = this.entryOf(c);
-    while (e.lower < e.upper) this.connectedAtMost(c, e.lower);
-    return e.upper;
+    const e = this.entryOf(c);
+    while (this.memo.lower(e) < this.memo.upper(e)) this.connectedAtMost(c, this.memo.lower(e));
+    return this.memo.upper(e);
   }
 
   /**
@@ -290,15 +335,16 @@ export class TreeDepthSearch {
    */
   label(s: Bitset, k: number, labels: Int32Array): void {
     for (const c of this.components(s)) {
-      const { e, shape } = this.entryOf(c);
-      if (e.upper > k && !this.connectedAtMost(c, k)) throw new Error('label: the set does not fit in k labels');
-      const fit = Math.min(e.upper, k);
-      if (e.choice < 0) {
+      const { e, raw } = this.partOf(c);
+      if (this.memo.upper(e) > k && !this.connectedAtMost(c, k)) throw new Error('label: the set does not fit in k labels');
+      const fit = Math.min(this.memo.upper(e), k);
+      const choice = this.memo.choice(e);
+      if (choice < 0) {
         let next = 1;
         c.forEach((v) => (labels[v] = next++));
         continue;
       }
-      const top = shape ? shape.fromCanonical(e.choice) : e.choice;
+      const top = raw >= 0 ? this.frameOf(raw).fromCanonical(choice) : choice;
       labels[top] = fit;
       this.label(c.clone().delete(top), fit - 1, labels);
     }

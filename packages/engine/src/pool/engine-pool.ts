@@ -1,4 +1,4 @@
-import { availableParallelism } from 'node:os';
+import { availableParallelism, totalmem } from 'node:os';
 import { MessageChannel } from 'node:worker_threads';
 import { Piscina } from 'piscina';
 import { EngineError } from '../errors';
@@ -8,7 +8,12 @@ import type { EngineTask, EngineTaskResult, ExactProgress, WorkerMessage, Worker
 export interface EnginePoolOptions {
   /** Worker threads; the machine's core count by default. */
   size?: number;
-  /** Heap limit per worker (V8 old generation), in MiB; a task beyond it fails, the pool carries on. */
+  /**
+   * Memory per worker, in MiB: the V8 heap limit (a task beyond it fails, the pool carries on) and the
+   * exact search's table budget (its tables are typed arrays outside the heap; at the budget the search
+   * stops with its proven interval). Without it the search may take a quarter of the machine's memory
+   * per worker.
+   */
   memoryLimitMb?: number;
   /** How long a cancelled or overdue task may take to stop by itself before its worker is ended. */
   graceMs?: number;
@@ -32,11 +37,14 @@ export class EnginePool {
   private readonly graceMs: number;
   readonly size: number;
   readonly memoryLimitMb: number | undefined;
+  /** The exact search's table budget per task, in MiB. */
+  readonly searchMemoryMb: number;
 
   constructor(options: EnginePoolOptions = {}) {
     this.size = Math.max(1, options.size ?? availableParallelism());
     this.graceMs = options.graceMs ?? 2000;
     this.memoryLimitMb = options.memoryLimitMb;
+    this.searchMemoryMb = options.memoryLimitMb ?? Math.floor(totalmem() / 2 ** 20 / 4);
     const filename = new URL(fromSource ? './worker.ts' : './worker.js', import.meta.url).href;
     this.piscina = new Piscina({
       filename,
@@ -67,7 +75,7 @@ export class EnginePool {
     // A search honours its own time limit; the pool only steps in if the worker does not come back.
     const overdue =
       task.kind === 'solve' && task.timeLimitMs !== undefined ? setTimeout(softStop, task.timeLimitMs + this.graceMs) : undefined;
-    const message: WorkerMessage = { task, port: port2, stop };
+    const message: WorkerMessage = { task, port: port2, stop, searchMemoryMb: this.searchMemoryMb };
     let reply: WorkerReply;
     try {
       reply = (await this.piscina.run(message, { transferList: [port2], signal: hardStop.signal })) as WorkerReply;

@@ -25,6 +25,8 @@ export interface WorkerMessage {
   task: EngineTask;
   port: import('node:worker_threads').MessagePort;
   stop: SharedArrayBuffer;
+  /** The exact search's table budget, in MiB (see EnginePoolOptions.memoryLimitMb). */
+  searchMemoryMb: number;
 }
 
 export type { ExactProgress };

@@ -18,7 +18,7 @@ export default function runTask(message: WorkerMessage): WorkerReply {
   }
 }
 
-function runEngineTask({ task, port, stop }: WorkerMessage): EngineTaskResult {
+function runEngineTask({ task, port, stop, searchMemoryMb }: WorkerMessage): EngineTaskResult {
   const files = task.files ?? {};
   const graph = graphFromSpec(task.spec, (path) => {
     const content = files[path];
@@ -31,6 +31,7 @@ function runEngineTask({ task, port, stop }: WorkerMessage): EngineTaskResult {
       ...(task.method ? { method: task.method } : {}),
       ...(task.timeLimitMs !== undefined ? { timeLimitMs: task.timeLimitMs } : {}),
       stopFlag: new Int32Array(stop),
+      memoryLimitMb: searchMemoryMb,
       onProgress: (p) => port.postMessage(p),
     });
     return { kind: 'solve', solution };

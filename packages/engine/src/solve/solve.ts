@@ -6,6 +6,7 @@ import type { LowerBound } from '../bounds/lower-bound';
 import type { UpperBound } from '../bounds/upper-bound';
 import { EngineError } from '../errors';
 import { exactTreeDepth, type ExactProgress } from '../exact/exact-tree-depth';
+import type { StopReason } from '../exact/search-stop';
 import { formulaFor } from '../formulas/formula-for';
 import type { Graph } from '../graph/graph';
 import { verifyRanking } from '../ranking/verify';
@@ -19,6 +20,8 @@ export interface SolveOptions {
   /** A flag shared with another thread: non-zero stops the search, as the signal does (worker threads). */
   stopFlag?: Int32Array;
   onProgress?: (p: ExactProgress) => void;
+  /** Memory the exact search's tables may take, in MiB (it then stops with the best interval). */
+  memoryLimitMb?: number;
   /** Known rank numbers of full grids (e.g. from the atlas), for rectangle lower bounds. */
   knownRectangle?: KnownRectangleValues;
 }
@@ -33,7 +36,7 @@ export interface Solution {
   provenance: { value: string; lower: { argument: string; source: string }; upper: { construction: string; argument: string } };
   witness: Record<string, unknown> | null;
   verified: boolean;
-  stats: { method: SolveMethod; elapsedMs: number; nodes: number; memoSize: number; stopReason: 'aborted' | 'time-limit' | null };
+  stats: { method: SolveMethod; elapsedMs: number; nodes: number; memoSize: number; stopReason: StopReason | null };
 }
 
 /**
@@ -76,6 +79,7 @@ export function solve(g: Graph, options: SolveOptions = {}): Solution {
       ...(options.signal ? { signal: options.signal } : {}),
       ...(options.stopFlag ? { stopFlag: options.stopFlag } : {}),
       ...(options.timeLimitMs !== undefined ? { timeLimitMs: options.timeLimitMs } : {}),
+      ...(options.memoryLimitMb !== undefined ? { memoryLimitMb: options.memoryLimitMb } : {}),
       ...(options.onProgress ? { onProgress: options.onProgress } : {}),
     });
     nodes = exact.nodes;

@@ -61,10 +61,28 @@ describe('EnginePool (real worker threads)', () => {
   it('fails a task that runs out of its memory limit, and the pool carries on', async () => {
     const small = new EnginePool({ size: 1, memoryLimitMb: 24 });
     try {
-      // The exact search's memo on a large grid grows without bound; the limit ends it.
-      await expect(small.run({ kind: 'solve', spec: 'grid:12x12', method: 'exact' })).rejects.toThrow(/ran out of memory \(limit 24 MiB per worker\)/);
+      // A JSON graph of 900,000 edges: parsing it makes as many small arrays in the heap, far beyond 24 MiB.
+      const edges = Array.from({ length: 900_000 }, (_, i) => `[${i},${i + 1}]`).join(',');
+      const files = { 'long.json': `{"vertexCount": 900001, "edges": [${edges}]}` };
+      await expect(small.run({ kind: 'solve', spec: 'long.json', files, method: 'bounds' })).rejects.toThrow(/ran out of memory \(limit 24 MiB per worker\)/);
       const after = await small.run({ kind: 'solve', spec: 'cycle:9' });
       expect(after.kind === 'solve' && after.solution.rankNumber).toBe(5);
+    } finally {
+      await small.close();
+    }
+  }, 30_000);
+
+  it('stops an exact search at the memory limit with its proven interval and a verified ranking', async () => {
+    const small = new EnginePool({ size: 1, memoryLimitMb: 32 });
+    try {
+      const result = await small.run({ kind: 'solve', spec: 'grid:12x12', method: 'exact', timeLimitMs: 120_000 });
+      if (result.kind !== 'solve') throw new Error('expected a solve result');
+      const s = result.solution;
+      expect(s.stats.stopReason).toBe('memory-limit');
+      expect(s.rankNumber).toBeNull();
+      expect(s.lower).toBeLessThan(s.upper);
+      expect(s.verified).toBe(true);
+      expect(Math.max(...s.labels)).toBe(s.upper);
     } finally {
       await small.close();
     }

@@ -26,7 +26,7 @@ export interface RunResultProps {
   mayReadGraph: boolean;
 }
 
-const STOP_WORDS = { aborted: 'the search was stopped', 'time-limit': 'the time limit ran out' } as const;
+const STOP_WORDS = { aborted: 'the search was stopped', 'time-limit': 'the time limit ran out', 'memory-limit': 'the memory limit was reached' } as const;
 
 function Section({ title, children, id }: { title: string; children: React.ReactNode; id: string }) {
   return (
