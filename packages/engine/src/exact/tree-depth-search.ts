@@ -4,6 +4,7 @@ import type { Graph } from '../graph/graph';
 import { CutVertices } from './cut-vertices';
 import { SearchStopped } from './search-stop';
 import { SearchMemo } from './search-memo';
+import { SetMinorMinWidth } from './set-minor-min-width';
 import { grown, SetTable } from './set-table';
 import { ShapeCanon, type CellFrame } from './shape-canon';
 
@@ -31,7 +32,7 @@ interface Part {
  * Exact tree-depth by search over vertex sets, from the defining recursion (Nešetřil & Ossona de Mendez,
  * Sparsity, 2012): td(empty) = 0, td(G) = max over components, td(G) = 1 + min_v td(G - v) for connected G.
  * Asked in decision form, "td(S) <= k?", every component first checked against its proven bounds, every
- * set's proven bounds memoised, and lower bounds cutting branches that cannot fit: degeneracy + 1 and the
+ * set's proven bounds memoised, and lower bounds cutting branches that cannot fit: minor-min-width + 1 and the
  * path bound from a breadth-first eccentricity, and for grid shapes the rectangle bound with missing
  * cells (value(R) - |R \ S| for each rectangle R of the bounding box). The same bound confines the top:
  * it must lie in every rectangle that already bounds S by k (see ShapeCanon.topWindow).
@@ -68,6 +69,7 @@ export class TreeDepthSearch {
     this.grown = new Bitset(this.n);
     this.cuts = new CutVertices(g.offsets, g.targets);
     this.canon = ShapeCanon.applies(g) ? new ShapeCanon(g) : undefined;
+    this.minorMinWidth = this.canon ? undefined : new SetMinorMinWidth(this.n, this.adj);
     this.byDegree = Uint32Array.from({ length: this.n }, (_, v) => v).sort((a, b) => g.degree(b) - g.degree(a) || a - b);
   }
 
@@ -76,6 +78,8 @@ export class TreeDepthSearch {
   private readonly frontier: Bitset;
   private readonly grown: Bitset;
   private readonly cuts: CutVertices;
+  /** General graphs: minor-min-width of a set, never below its degeneracy (grid shapes need neither). */
+  private readonly minorMinWidth: SetMinorMinWidth | undefined;
 
   /** The connected components of S, largest first. */
   components(s: Bitset): Bitset[] {
@@ -114,12 +118,12 @@ export class TreeDepthSearch {
   }
 
   /**
-   * Proven lower bound for a connected set: the degeneracy plus one (skipped for grid shapes, see
-   * degeneracyBound), the path bound from a breadth-first eccentricity, and for grid shapes the
-   * rectangle bound with missing cells.
+   * Proven lower bound for a connected set: the minor-min-width plus one (skipped for grid shapes: their
+   * degeneracy is at most 2, and a 2 x 2 block gives the 3 through the rectangle bound), the path bound
+   * from a breadth-first eccentricity, and for grid shapes the rectangle bound with missing cells.
    */
   private cheapLowerBound(c: Bitset, size: number): number {
-    const byDegeneracy = this.canon ? Math.min(size, 2) : this.degeneracyBound(c, size);
+    const byWidth = this.canon ? Math.min(size, 2) : this.minorMinWidth!.bound(c);
     // A breadth-first search from the first vertex reaches a vertex at distance ecc: a path of ecc + 1
     // vertices, so td >= ⌊log2(ecc + 1)⌋ + 1 (Bodlaender et al., SIAM J. Discrete Math. 1998).
     let ecc = 0;
@@ -135,31 +139,7 @@ export class TreeDepthSearch {
       frontier.copyFrom(next);
       ecc++;
     }
-    return Math.max(byDegeneracy, 32 - Math.clz32(ecc + 1), this.rectangleBound(c));
-  }
-
-  /**
-   * The degeneracy plus one (td >= tw + 1 >= degeneracy + 1; a clique gets its size this way). Grid shapes
-   * skip it: their degeneracy is at most 2, and a 2 x 2 block gives the 3 through the rectangle bound.
-   */
-  private degeneracyBound(c: Bitset, size: number): number {
-    // Degeneracy: repeatedly remove a vertex of least degree inside what is left (Matula & Beck 1983).
-    const left = c.clone();
-    const deg = new Int32Array(this.n);
-    c.forEach((v) => (deg[v] = this.adj[v]!.and(c).popcount()));
-    let degeneracy = 0;
-    for (let remaining = size; remaining > 0; remaining--) {
-      let best = -1;
-      left.forEach((v) => {
-        if (best < 0 || deg[v]! < deg[best]!) best = v;
-      });
-      degeneracy = Math.max(degeneracy, deg[best]!);
-      left.delete(best);
-      this.adj[best]!.forEach((w) => {
-        if (left.has(w)) deg[w]!--;
-      });
-    }
-    return degeneracy + 1;
+    return Math.max(byWidth, 32 - Math.clz32(ecc + 1), this.rectangleBound(c));
   }
 
   /**
