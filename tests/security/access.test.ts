@@ -7,7 +7,9 @@
 //  - a private run is unreadable by another researcher (and a viewer) through every route, and its share
 //    link is gone once it is private again;
 //  - key secrets, session cookies and the session secret never appear in answers after a key's creation,
-//    nor in the server's log output.
+//    nor in the server's log output;
+//  - a member at the limit of runs queued or running gets 429 and nothing is stored, and the largest graph
+//    a run takes depends on the role (a researcher's is refused where an admin's is taken).
 import { signInThroughLocalProvider } from '../support/local-sign-in';
 import { createHmac, randomBytes, randomUUID } from 'node:crypto';
 import type { ApiKeyCreatedResponse, MeResponse, RunList, RunView } from '@cairn/schema';
@@ -446,7 +448,76 @@ describe('secrets', () => {
   });
 });
 
-describe('limits by member and role (gaps: the server has none; not implemented here)', () => {
-  it.todo('a member may have at most N runs queued or running at once (no per-member limit exists; only the global rate limit per key or address)');
-  it.todo('the largest graph a run takes depends on the role (one global cap, 1,000,000 vertices / 4,000,000 edges, for every role)');
+describe('limits by member and role', () => {
+  /** A second built server on the same database whose researchers may have 3 more runs queued or running than wren has. */
+  let limit = 3;
+  let limited: BuiltServer;
+  let wrenKey: string;
+  const wrenRuns: string[] = [];
+  const limitedCall = (method: string, path: string, body?: string) =>
+    fetch(`${limited.url}${path}`, { method, headers: { authorization: `Bearer ${wrenKey}`, ...(body ? { 'content-type': 'application/json' } : {}) }, body: body ?? null });
+  const activeRunsOfWren = async () =>
+    (await sql<{ n: number }>(`SELECT count(*)::int AS n FROM runs r JOIN users u ON u.id = r.owner_id WHERE u.login = 'wren-adeyemi' AND r.sweep_id IS NULL AND r.status IN ('queued', 'running')`))[0]!.n;
+
+  beforeAll(async () => {
+    wrenKey = (await makeKey('wren-adeyemi', 'limit-checker')).secret;
+    // Other test files share this database: runs wren may have left active there count too.
+    limit += await activeRunsOfWren();
+    limited = await startBuiltServer({ CAIRN_RUN_CONCURRENCY: '0', CAIRN_RATE_LIMIT_PER_MINUTE: '100000', CAIRN_MAX_ACTIVE_RUNS_RESEARCHER: String(limit) });
+  }, 60_000);
+
+  afterAll(async () => {
+    // Leave no long runs behind for the worker of the main server (and the test files after this one).
+    for (const id of wrenRuns) await call('POST', `/api/v1/runs/${id}/cancel`, { authorization: `Bearer ${wrenKey}` });
+    await limited?.stop();
+  });
+
+  it('a researcher (by API key) at the limit of runs queued or running gets 429 and nothing is stored; after a cancel they may submit again', async () => {
+    // Exact searches on 10 x n grids do not finish within this test: they stay queued or running.
+    for (const spec of ['grid:10x11', 'grid:10x12', 'grid:10x13']) {
+      const res = await limitedCall('POST', '/api/v1/runs', JSON.stringify({ spec, method: 'exact', timeLimitSeconds: 600 }));
+      expect(res.status, spec).toBe(202);
+      wrenRuns.push(((await res.json()) as RunView).id);
+    }
+    expect(await activeRunsOfWren()).toBe(limit);
+    const counts = await rowCounts();
+    const refused = await limitedCall('POST', '/api/v1/runs', JSON.stringify({ spec: 'grid:10x14', method: 'exact', timeLimitSeconds: 600 }));
+    expect(refused.status).toBe(429);
+    expect(await refused.json()).toEqual({
+      error: {
+        code: 'too_many_active_runs',
+        message: `you have ${limit} runs queued or running; a researcher may have at most ${limit} at once: wait for one to finish, or cancel one`,
+        details: { limit: limit, active: limit, role: 'researcher' },
+      },
+    });
+    expect(await rowCounts()).toEqual(counts);
+    expect(await sql(`SELECT id FROM runs WHERE graph_key = 'grid:10x14'`)).toHaveLength(0);
+
+    const cancelled = await limitedCall('POST', `/api/v1/runs/${wrenRuns[0]}/cancel`);
+    expect(cancelled.status).toBe(202);
+    // A queued run is cancelled at once; a running one as soon as its worker sees the request.
+    await waitForRun(server.url, wrenRuns[0]!, `Bearer ${wrenKey}`);
+    const again = await limitedCall('POST', '/api/v1/runs', JSON.stringify({ spec: 'grid:10x14', method: 'exact', timeLimitSeconds: 600 }));
+    expect(again.status).toBe(202);
+    wrenRuns.push(((await again.json()) as RunView).id);
+    expect(await activeRunsOfWren()).toBe(limit);
+  }, 60_000);
+
+  it('the largest graph a run takes depends on the role: a researcher’s 260,000-vertex grid is refused (413), an admin’s is taken', async () => {
+    const spec = 'grid:500x520';
+    const counts = await rowCounts();
+    const researcher = await call('POST', '/api/v1/runs', { authorization: `Bearer ${wrenKey}` }, JSON.stringify({ spec, method: 'bounds', timeLimitSeconds: 5 }));
+    expect(researcher.status).toBe(413);
+    expect(JSON.parse(researcher.text)).toMatchObject({
+      error: { code: 'graph_too_large', message: `body.spec: ${spec} has 260000 vertices; a researcher may run graphs of at most 250000 vertices and 1000000 edges (use the cairn CLI for larger ones)` },
+    });
+    expect(await rowCounts()).toEqual(counts);
+
+    const admin = sessions['ines-marlow']!;
+    const byAdmin = await call('POST', '/api/v1/runs', { cookie: admin.cookie, 'x-csrf-token': admin.csrf }, JSON.stringify({ spec, method: 'bounds', timeLimitSeconds: 5 }));
+    expect(byAdmin.status).toBe(202);
+    const run = JSON.parse(byAdmin.text) as RunView;
+    expect(run.graphKey).toBe(spec);
+    expect((await call('POST', `/api/v1/runs/${run.id}/cancel`, { cookie: admin.cookie, 'x-csrf-token': admin.csrf })).status).toBe(202);
+  }, 60_000);
 });

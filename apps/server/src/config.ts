@@ -1,7 +1,9 @@
 import { z } from 'zod';
+import { MAX_RUN_EDGES, MAX_RUN_VERTICES } from './services/run-limits';
 
 // Port 0 lets the system choose a free port (the tests use it).
 const port = (fallback: number) => z.coerce.number().int().min(0).max(65535).default(fallback);
+const count = (fallback: number, max = 1_000_000_000) => z.coerce.number().int().min(1).max(max).default(fallback);
 const flag = (fallback: boolean) =>
   z
     .enum(['1', '0', 'true', 'false', 'yes', 'no'])
@@ -34,6 +36,16 @@ const ConfigSchema = z.object({
   CAIRN_ENGINE_MEMORY_MB: z.coerce.number().int().min(32).max(1_048_576).optional(),
   CAIRN_UPLOAD_LIMIT_MB: z.coerce.number().min(0.001).max(1024).default(20),
   CAIRN_RATE_LIMIT_PER_MINUTE: z.coerce.number().int().min(1).default(600),
+  // Per member, by role (viewers start no runs): runs queued or running at once (outside sweeps), sweeps
+  // with a run queued or running, and the largest graph of a run (never above the server's hard cap).
+  CAIRN_MAX_ACTIVE_RUNS_RESEARCHER: count(20),
+  CAIRN_MAX_ACTIVE_RUNS_ADMIN: count(100),
+  CAIRN_MAX_ACTIVE_SWEEPS_RESEARCHER: count(5),
+  CAIRN_MAX_ACTIVE_SWEEPS_ADMIN: count(20),
+  CAIRN_MAX_RUN_VERTICES_RESEARCHER: count(250_000, MAX_RUN_VERTICES),
+  CAIRN_MAX_RUN_EDGES_RESEARCHER: count(1_000_000, MAX_RUN_EDGES),
+  CAIRN_MAX_RUN_VERTICES_ADMIN: count(MAX_RUN_VERTICES, MAX_RUN_VERTICES),
+  CAIRN_MAX_RUN_EDGES_ADMIN: count(MAX_RUN_EDGES, MAX_RUN_EDGES),
   CAIRN_LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
 });
 
@@ -65,6 +77,21 @@ export interface Config {
   engineMemoryMb: number | undefined;
   uploadLimitBytes: number;
   rateLimitPerMinute: number;
+  /** What a member of each role that may start runs may have queued and how large its graphs may be. */
+  memberLimits: Record<RunningRole, MemberLimits>;
+}
+
+/** The roles that may start runs (viewers may not). */
+export type RunningRole = 'researcher' | 'admin';
+
+export interface MemberLimits {
+  /** Runs outside sweeps queued or running at once. */
+  activeRuns: number;
+  /** Sweeps with at least one run queued or running (each has at most MAX_SWEEP_CELLS cells). */
+  activeSweeps: number;
+  /** The largest graph of a run, a sweep's cell or an upload run. */
+  runVertices: number;
+  runEdges: number;
 }
 
 export class ConfigError extends Error {}
@@ -111,5 +138,19 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
     engineMemoryMb: e.CAIRN_ENGINE_MEMORY_MB,
     uploadLimitBytes: Math.round(e.CAIRN_UPLOAD_LIMIT_MB * 1024 * 1024),
     rateLimitPerMinute: e.CAIRN_RATE_LIMIT_PER_MINUTE,
+    memberLimits: {
+      researcher: {
+        activeRuns: e.CAIRN_MAX_ACTIVE_RUNS_RESEARCHER,
+        activeSweeps: e.CAIRN_MAX_ACTIVE_SWEEPS_RESEARCHER,
+        runVertices: e.CAIRN_MAX_RUN_VERTICES_RESEARCHER,
+        runEdges: e.CAIRN_MAX_RUN_EDGES_RESEARCHER,
+      },
+      admin: {
+        activeRuns: e.CAIRN_MAX_ACTIVE_RUNS_ADMIN,
+        activeSweeps: e.CAIRN_MAX_ACTIVE_SWEEPS_ADMIN,
+        runVertices: e.CAIRN_MAX_RUN_VERTICES_ADMIN,
+        runEdges: e.CAIRN_MAX_RUN_EDGES_ADMIN,
+      },
+    },
   };
 }

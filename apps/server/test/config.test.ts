@@ -22,6 +22,19 @@ describe('loadConfig', () => {
     expect(() => loadConfig({ CAIRN_GITHUB_CLIENT_ID: 'only-the-id' })).toThrow(/go together/);
   });
 
+  it('sets the per-member limits by role, from the environment within the server\'s hard caps', () => {
+    expect(loadConfig({}).memberLimits).toEqual({
+      researcher: { activeRuns: 20, activeSweeps: 5, runVertices: 250_000, runEdges: 1_000_000 },
+      admin: { activeRuns: 100, activeSweeps: 20, runVertices: 1_000_000, runEdges: 4_000_000 },
+    });
+    const c = loadConfig({ CAIRN_MAX_ACTIVE_RUNS_RESEARCHER: '5000', CAIRN_MAX_ACTIVE_SWEEPS_ADMIN: '2', CAIRN_MAX_RUN_VERTICES_RESEARCHER: '1000000' });
+    expect(c.memberLimits.researcher).toMatchObject({ activeRuns: 5000, runVertices: 1_000_000 });
+    expect(c.memberLimits.admin.activeSweeps).toBe(2);
+    expect(() => loadConfig({ CAIRN_MAX_RUN_VERTICES_ADMIN: '1000001' })).toThrow(/CAIRN_MAX_RUN_VERTICES_ADMIN/);
+    expect(() => loadConfig({ CAIRN_MAX_RUN_EDGES_RESEARCHER: '4000001' })).toThrow(/CAIRN_MAX_RUN_EDGES_RESEARCHER/);
+    expect(() => loadConfig({ CAIRN_MAX_ACTIVE_RUNS_RESEARCHER: '0' })).toThrow(/CAIRN_MAX_ACTIVE_RUNS_RESEARCHER/);
+  });
+
   it('names each wrong variable', () => {
     expect(() => loadConfig({ CAIRN_PORT: 'eighty', CAIRN_DB_NAME: 'Robert; DROP' })).toThrow(ConfigError);
     try {

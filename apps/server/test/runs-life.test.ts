@@ -152,7 +152,7 @@ describe('bad run requests', () => {
   it('refuses graphs over the size limit with 413 and a clear message', async () => {
     const e = await problem({ spec: 'grid:2000x2000' }, 413);
     expect(e.code).toBe('graph_too_large');
-    expect(e.message).toMatch(/^body\.spec: grid:2000x2000 has 4000000 vertices; a run takes graphs of at most 1000000 vertices/);
+    expect(e.message).toMatch(/^body\.spec: grid:2000x2000 has 4000000 vertices; a researcher may run graphs of at most 250000 vertices and 1000000 edges/);
   });
 
   it('names the other fields: exactly one of spec and graphId, limits, method', async () => {

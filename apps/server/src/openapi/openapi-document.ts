@@ -16,7 +16,7 @@ const ERROR_RESPONSES: Readonly<Record<number, { name: string; description: stri
   404: { name: 'NotFound', description: 'No such thing, or one the caller may not see' },
   409: { name: 'Conflict', description: 'The request conflicts with what is stored' },
   413: { name: 'TooLarge', description: 'The upload, body or graph is larger than the server accepts' },
-  429: { name: 'RateLimited', description: 'Too many requests; `details.retryAfterSeconds` says when to try again' },
+  429: { name: 'RateLimited', description: 'Too many requests (`details.retryAfterSeconds` says when to try again), or, on submissions, too many of your runs or sweeps queued or running at once (`details.limit`, `details.active`)' },
 };
 
 export interface DocumentInfo {

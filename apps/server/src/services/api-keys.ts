@@ -105,22 +105,70 @@ export async function revokeApiKey(source: DataSource, id: string): Promise<bool
   return repo.existsBy({ id });
 }
 
+/** The row of USE_KEY: the key's columns and its owner's (prefixed `u_`). */
+interface UsedKeyRow {
+  id: string;
+  user_id: string;
+  name: string;
+  prefix: string;
+  secret_hash: string;
+  scopes: ApiScope[];
+  created_by: string | null;
+  created_at: Date;
+  last_used_at: Date;
+  revoked_at: Date | null;
+  u_github_id: string;
+  u_login: string;
+  u_display_name: string | null;
+  u_email: string | null;
+  u_role: User['role'];
+  u_notify_on_finish: boolean;
+  u_created_at: Date;
+  u_updated_at: Date;
+}
+
+/**
+ * Marks the live key with this hash as used and reads it with its owner, in one statement (one round trip
+ * and one index lookup on the unique secret_hash): a revoked key matches no row, so it is refused from the
+ * first request after its revocation committed.
+ */
+const USE_KEY = `WITH used AS (
+    UPDATE api_keys SET last_used_at = now() WHERE secret_hash = $1 AND revoked_at IS NULL
+    RETURNING id, user_id, name, prefix, secret_hash, scopes, created_by, created_at, last_used_at, revoked_at
+  )
+  SELECT used.*, u.github_id AS u_github_id, u.login AS u_login, u.display_name AS u_display_name, u.email AS u_email,
+    u.role AS u_role, u.notify_on_finish AS u_notify_on_finish, u.created_at AS u_created_at, u.updated_at AS u_updated_at
+  FROM used JOIN users u ON u.id = used.user_id`;
+
 /**
  * The live key with this secret and its owner, marked as used now; undefined for an unknown or revoked
- * secret. Looked up on every request, so a revocation takes effect at once.
+ * secret. Looked up on every request (no cache), so a revocation takes effect at once.
  */
 export async function useApiKey(source: DataSource, secret: string): Promise<{ key: ApiKey; user: User } | undefined> {
-  const keys = source.getRepository(ApiKey);
-  const key = await keys.findOneBy({ secretHash: hashKeySecret(secret), revokedAt: IsNull() });
-  if (!key) return undefined;
-  const user = await source.getRepository(User).findOneBy({ id: key.userId });
-  if (!user) return undefined;
-  const [rows] = (await source.query(`UPDATE api_keys SET last_used_at = now() WHERE id = $1 AND revoked_at IS NULL RETURNING last_used_at`, [key.id])) as [
-    { last_used_at: Date }[],
-    number,
-  ];
-  const used = rows[0];
-  if (!used) return undefined; // revoked between the two statements
-  key.lastUsedAt = used.last_used_at;
+  const [row] = (await source.query(USE_KEY, [hashKeySecret(secret)])) as UsedKeyRow[];
+  if (!row) return undefined;
+  const key = Object.assign(new ApiKey(), {
+    id: row.id,
+    userId: row.user_id,
+    name: row.name,
+    prefix: row.prefix,
+    secretHash: row.secret_hash,
+    scopes: row.scopes,
+    createdBy: row.created_by,
+    createdAt: row.created_at,
+    lastUsedAt: row.last_used_at,
+    revokedAt: row.revoked_at,
+  });
+  const user = Object.assign(new User(), {
+    id: row.user_id,
+    githubId: row.u_github_id,
+    login: row.u_login,
+    displayName: row.u_display_name,
+    email: row.u_email,
+    role: row.u_role,
+    notifyOnFinish: row.u_notify_on_finish,
+    createdAt: row.u_created_at,
+    updatedAt: row.u_updated_at,
+  });
   return { key, user };
 }

@@ -5,7 +5,7 @@ import { seesEveryRun } from '../auth/actor';
 import { HttpError } from '../http/errors';
 import { graphKeyOf, type GraphKey } from './graph-key';
 import { uploadForEngine, type MemberActor } from './graphs';
-import { MAX_RUN_EDGES, MAX_RUN_VERTICES } from './run-limits';
+import type { MemberLimits } from '../config';
 
 /** A spec of a built-in family the server builds itself (masks and trees inline; no files). */
 export type BuiltInSpec = Exclude<EngineSpec, { family: 'file' }>;
@@ -92,11 +92,12 @@ function plannedSize(s: BuiltInSpec): { vertices: number; edges: number } {
   }
 }
 
-function checkSize(what: string, vertices: number, edges: number): void {
-  if (vertices > MAX_RUN_VERTICES || edges > MAX_RUN_EDGES) {
-    const has = vertices > MAX_RUN_VERTICES ? `${vertices} vertices` : `${edges} edges`;
+/** 413 graph_too_large when a graph is larger than the caller's role allows (an API key acts as its owner). */
+function checkSize(what: string, vertices: number, edges: number, actor: MemberActor, limits: MemberLimits): void {
+  if (vertices > limits.runVertices || edges > limits.runEdges) {
+    const has = vertices > limits.runVertices ? `${vertices} vertices` : `${edges} edges`;
     throw specProblem(
-      `${what} has ${has}; a run takes graphs of at most ${MAX_RUN_VERTICES} vertices and ${MAX_RUN_EDGES} edges (use the cairn CLI for larger ones)`,
+      `${what} has ${has}; a ${actor.user.role} may run graphs of at most ${limits.runVertices} vertices and ${limits.runEdges} edges (use the cairn CLI for larger ones)`,
       413,
       'graph_too_large',
     );
@@ -119,11 +120,12 @@ function builtInSpec(input: NonNullable<RunRequest['spec']>): BuiltInSpec | { fa
 }
 
 /**
- * Resolves the graph of a run request: parses and size-checks the spec, builds it once (so a bad mask
- * or parent array is a 400 now, not a failed run later), and keys it for the atlas. An upload must be
- * the caller's own (or the caller an admin); another member's upload is 404, as if it did not exist.
+ * Resolves the graph of a run request: parses and size-checks the spec (against the limits of the caller's
+ * role), builds it once (so a bad mask or parent array is a 400 now, not a failed run later), and keys it
+ * for the atlas. An upload must be the caller's own (or the caller an admin); another member's upload is
+ * 404, as if it did not exist.
  */
-export async function resolveRunGraph(source: DataSource, actor: MemberActor, request: Pick<RunRequest, 'spec' | 'graphId'>): Promise<RunGraph> {
+export async function resolveRunGraph(source: DataSource, actor: MemberActor, request: Pick<RunRequest, 'spec' | 'graphId'>, limits: MemberLimits): Promise<RunGraph> {
   const named = request.spec === undefined ? { family: 'upload' as const, graphId: request.graphId! } : builtInSpec(request.spec);
   if (named.family === 'upload') {
     const upload = await uploadForEngine(source, named.graphId);
@@ -131,7 +133,7 @@ export async function resolveRunGraph(source: DataSource, actor: MemberActor, re
     if (!upload || (upload.graph.ownerId !== actor.user.id && !seesEveryRun(actor))) {
       throw new HttpError(404, 'not_found', `${field}: no uploaded graph ${named.graphId}`, { problems: [{ field, message: 'no such uploaded graph' }] });
     }
-    checkSize(`the upload ${upload.graph.name}`, upload.graph.vertexCount, upload.graph.edgeCount);
+    checkSize(`the upload ${upload.graph.name}`, upload.graph.vertexCount, upload.graph.edgeCount, actor, limits);
     const spec = { family: 'upload', graphId: upload.graph.id, name: upload.graph.name };
     return {
       spec,
@@ -144,7 +146,7 @@ export async function resolveRunGraph(source: DataSource, actor: MemberActor, re
   }
   const planned = plannedSize(named);
   const specText = specTextOf(named as unknown as Record<string, unknown>);
-  checkSize(specText, planned.vertices, planned.edges);
+  checkSize(specText, planned.vertices, planned.edges, actor, limits);
   let built;
   try {
     built = graphFromSpec(named);
@@ -152,7 +154,7 @@ export async function resolveRunGraph(source: DataSource, actor: MemberActor, re
     if (err instanceof EngineError) throw specProblem(err.message);
     throw err;
   }
-  checkSize(specText, built.vertexCount, built.edgeCount);
+  checkSize(specText, built.vertexCount, built.edgeCount, actor, limits);
   return {
     spec: { ...named } as Record<string, unknown>,
     specText,

@@ -3,7 +3,9 @@ import type { RunRequest, RunView, SolveMethod, Visibility } from '@cairn/schema
 import type { DataSource, EntityManager } from 'typeorm';
 import type { ServerContext } from '../context';
 import { enqueueRun, runQueueSender } from '../jobs/run-queue';
+import { assertRoomForRun, lockMemberSubmissions } from './active-runs';
 import type { MemberActor } from './graphs';
+import { limitsOf } from './run-limits';
 import { loadRunRow, queryRows } from './run-row';
 import { newShareToken } from './run-share-token';
 import { resolveRunGraph, type RunGraph } from './run-spec';
@@ -49,22 +51,25 @@ export async function insertRun(manager: EntityManager, run: NewRun): Promise<st
 
 /**
  * POST /api/v1/runs: a new queued run, or the caller's identical run when one is queued, running or
- * done (`created` false), so a repeated request never computes twice. Concurrent identical requests
- * are serialised on the request's hash, so they too find one run.
+ * done (`created` false), so a repeated request never computes twice. A member's submissions are
+ * serialised (lockMemberSubmissions), so concurrent identical requests find one run and concurrent new
+ * ones cannot pass the member's limit of active runs together (429 too_many_active_runs, nothing stored).
  */
 export async function createRun(ctx: ServerContext, source: DataSource, actor: MemberActor, request: RunRequest): Promise<{ run: RunView; created: boolean }> {
-  const graph = await resolveRunGraph(source, actor, request);
+  const limits = limitsOf(ctx.config, actor.user.role);
+  const graph = await resolveRunGraph(source, actor, request, limits);
   await runQueueSender(source);
   const ownerId = actor.user.id;
   const hash = requestHashOf(ownerId, graph.key.key, request.method, request.timeLimitSeconds);
   const { id, created } = await source.transaction(async (manager) => {
-    await manager.query(`SELECT pg_advisory_xact_lock(hashtextextended($1, 0))`, [hash]);
+    await lockMemberSubmissions(manager, ownerId);
     const [existing] = await queryRows<{ id: string }>(
       manager,
       `SELECT id FROM runs WHERE owner_id = $1 AND request_hash = $2 AND status IN ('queued', 'running', 'done') ORDER BY created_at DESC LIMIT 1`,
       [ownerId, hash],
     );
     if (existing) return { id: existing.id, created: false };
+    await assertRoomForRun(manager, actor, limits);
     const newId = await insertRun(manager, { ownerId, graph, method: request.method, timeLimitSeconds: request.timeLimitSeconds, visibility: request.visibility ?? 'private' });
     return { id: newId, created: true };
   });

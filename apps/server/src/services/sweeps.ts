@@ -6,7 +6,8 @@ import { HttpError } from '../http/errors';
 import { runQueueSender } from '../jobs/run-queue';
 import { graphKeyOf } from './graph-key';
 import type { MemberActor } from './graphs';
-import { MAX_RUN_VERTICES } from './run-limits';
+import { assertRoomForSweep, lockMemberSubmissions } from './active-runs';
+import { limitsOf } from './run-limits';
 import { queryRows } from './run-row';
 import { specTextOf } from './run-spec';
 import { insertRun } from './runs';
@@ -22,10 +23,17 @@ const MINIMUM: Record<SweepRequest['family'], { rows: number; cols: number }> = 
   torus: { rows: 3, cols: 3 },
 };
 
+/** Vertices and edges of a cell: a grid, a cylinder (columns closed into cycles) or a torus. */
+function cellSize(family: SweepRequest['family'], rows: number, cols: number): { vertices: number; edges: number } {
+  const vertices = rows * cols;
+  return { vertices, edges: family === 'grid' ? 2 * vertices - rows - cols : family === 'cylinder' ? 2 * vertices - cols : 2 * vertices };
+}
+
 /**
  * POST /api/v1/sweeps: one run per distinct graph of the table, all inserted with their jobs in one
  * transaction (a sweep is queued whole or not at all). Grids and tori compute each transposed pair
- * once; the table shows the shared run in both cells.
+ * once; the table shows the shared run in both cells. Each cell must fit the caller's role (413), and
+ * the caller may have only so many sweeps in progress (429 too_many_active_sweeps).
  */
 export async function createSweep(ctx: ServerContext, source: DataSource, actor: MemberActor, request: SweepRequest): Promise<SweepView> {
   const min = MINIMUM[request.family];
@@ -34,16 +42,26 @@ export async function createSweep(ctx: ServerContext, source: DataSource, actor:
   const ranges = { family: request.family, rowsFrom: request.rows.from, rowsTo: request.rows.to, colsFrom: request.cols.from, colsTo: request.cols.to };
   const cellCount = (ranges.rowsTo - ranges.rowsFrom + 1) * (ranges.colsTo - ranges.colsFrom + 1);
   if (cellCount > MAX_SWEEP_CELLS) throw field('body.cols.to', `the sweep has ${cellCount} cells; a sweep may have at most ${MAX_SWEEP_CELLS} (split it into several)`);
-  if (ranges.rowsTo * ranges.colsTo > MAX_RUN_VERTICES) {
-    throw new HttpError(413, 'graph_too_large', `body.cols.to: the largest cell, ${ranges.rowsTo} x ${ranges.colsTo}, has more than the ${MAX_RUN_VERTICES} vertices a run takes`, {
-      problems: [{ field: 'body.cols.to', message: 'a cell is too large for a run' }],
-    });
+  // The largest cell (rowsTo x colsTo) has the most vertices and edges; the role's graph limit applies to it.
+  const limits = limitsOf(ctx.config, actor.user.role);
+  const largest = cellSize(request.family, ranges.rowsTo, ranges.colsTo);
+  if (largest.vertices > limits.runVertices || largest.edges > limits.runEdges) {
+    const has = largest.vertices > limits.runVertices ? `${largest.vertices} vertices` : `${largest.edges} edges`;
+    throw new HttpError(
+      413,
+      'graph_too_large',
+      `body.cols.to: the largest cell, ${ranges.rowsTo} x ${ranges.colsTo}, has ${has}; a ${actor.user.role} may run graphs of at most ${limits.runVertices} vertices and ${limits.runEdges} edges`,
+      { problems: [{ field: 'body.cols.to', message: 'a cell is too large for a run' }] },
+    );
   }
   const runs = distinctRuns(sweepCells(ranges));
   const name = request.name ?? `${request.family} ${ranges.rowsFrom}..${ranges.rowsTo} x ${ranges.colsFrom}..${ranges.colsTo}`;
   const visibility = request.visibility ?? 'private';
   await runQueueSender(source);
   const sweepId = await source.transaction(async (manager) => {
+    // A sweep's runs count against the limit of active sweeps, not one by one against the active runs.
+    await lockMemberSubmissions(manager, actor.user.id);
+    await assertRoomForSweep(manager, actor, limits);
     const [sweep] = await queryRows<{ id: string }>(
       manager,
       `INSERT INTO sweeps (owner_id, name, family, rows_from, rows_to, cols_from, cols_to, method, time_limit_seconds, visibility)
@@ -52,8 +70,7 @@ export async function createSweep(ctx: ServerContext, source: DataSource, actor:
     );
     for (const { rows, cols } of runs) {
       const spec = { family: request.family, rows, cols };
-      const vertices = rows * cols;
-      const edges = request.family === 'grid' ? 2 * vertices - rows - cols : request.family === 'cylinder' ? 2 * vertices - cols : 2 * vertices;
+      const { vertices, edges } = cellSize(request.family, rows, cols);
       await insertRun(manager, {
         ownerId: actor.user.id,
         graph: { spec, specText: specTextOf(spec), key: graphKeyOf(spec), graphId: null, vertexCount: vertices, edgeCount: edges },
