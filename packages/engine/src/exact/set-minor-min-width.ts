@@ -1,4 +1,4 @@
-import type { Bitset } from '../graph/bitset';
+import { popcount32, type Bitset } from '../graph/bitset';
 
 /**
  * Minor-min-width of the subgraph induced by a vertex set (Gogate & Dechter, UAI 2004, with the min-d
@@ -93,11 +93,4 @@ export class SetMinorMinWidth {
     }
     return width + 1;
   }
-}
-
-function popcount32(x: number): number {
-  x -= (x >>> 1) & 0x55555555;
-  x = (x & 0x33333333) + ((x >>> 2) & 0x33333333);
-  x = (x + (x >>> 4)) & 0x0f0f0f0f;
-  return Math.imul(x, 0x01010101) >>> 24;
 }

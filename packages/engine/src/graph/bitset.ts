@@ -1,5 +1,5 @@
 /** Bits counted in one 32-bit word (SWAR popcount). */
-function popcount32(x: number): number {
+export function popcount32(x: number): number {
   x -= (x >>> 1) & 0x55555555;
   x = (x & 0x33333333) + ((x >>> 2) & 0x33333333);
   x = (x + (x >>> 4)) & 0x0f0f0f0f;

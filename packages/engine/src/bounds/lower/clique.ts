@@ -1,3 +1,4 @@
+import { popcount32 } from '../../graph/bitset';
 import type { Graph } from '../../graph/graph';
 import type { LowerBound } from '../lower-bound';
 import { CITE } from './citations';
@@ -63,13 +64,6 @@ export function cliqueBound(g: Graph, options: CliqueOptions = {}): LowerBound {
     witness: { kind: 'clique', vertices },
     argument: `a clique on ${vertices.length} vertices needs ${vertices.length} distinct labels (${CITE.common}); found by Bron–Kerbosch with pivoting (${CITE.bronKerbosch}; ${CITE.tomita}; ${CITE.eppstein}); ${status}`,
   };
-}
-
-function popcount32(x: number): number {
-  x -= (x >>> 1) & 0x55555555;
-  x = (x & 0x33333333) + ((x >>> 2) & 0x33333333);
-  x = (x + (x >>> 4)) & 0x0f0f0f0f;
-  return Math.imul(x, 0x01010101) >>> 24;
 }
 
 /**
