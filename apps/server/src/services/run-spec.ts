@@ -6,6 +6,7 @@ import { HttpError } from '../http/errors';
 import { graphKeyOf, type GraphKey } from './graph-key';
 import { uploadForEngine, type MemberActor } from './graphs';
 import type { MemberLimits } from '../config';
+import { tooLargeFor } from './run-limits';
 
 /** A spec of a built-in family the server builds itself (masks and trees inline; no files). */
 export type BuiltInSpec = Exclude<EngineSpec, { family: 'file' }>;
@@ -61,7 +62,7 @@ export function specTextOf(spec: Record<string, unknown>): string {
 }
 
 /** Vertices and edges a family spec will have, counted before anything is built (gnp: the expected edges). */
-function plannedSize(s: BuiltInSpec): { vertices: number; edges: number } {
+export function plannedSize(s: BuiltInSpec): { vertices: number; edges: number } {
   switch (s.family) {
     case 'grid':
       return { vertices: s.rows * s.cols, edges: 2 * s.rows * s.cols - s.rows - s.cols };
@@ -94,14 +95,8 @@ function plannedSize(s: BuiltInSpec): { vertices: number; edges: number } {
 
 /** 413 graph_too_large when a graph is larger than the caller's role allows (an API key acts as its owner). */
 function checkSize(what: string, vertices: number, edges: number, actor: MemberActor, limits: MemberLimits): void {
-  if (vertices > limits.runVertices || edges > limits.runEdges) {
-    const has = vertices > limits.runVertices ? `${vertices} vertices` : `${edges} edges`;
-    throw specProblem(
-      `${what} has ${has}; a ${actor.user.role} may run graphs of at most ${limits.runVertices} vertices and ${limits.runEdges} edges (use the cairn CLI for larger ones)`,
-      413,
-      'graph_too_large',
-    );
-  }
+  const tooLarge = tooLargeFor(what, vertices, edges, actor.user.role, limits);
+  if (tooLarge) throw specProblem(`${tooLarge} (use the cairn CLI for larger ones)`, 413, 'graph_too_large');
 }
 
 /** The built-in spec a request names, from its text or JSON form; file specs are refused. */

@@ -7,9 +7,9 @@ import { runQueueSender } from '../jobs/run-queue';
 import { graphKeyOf } from './graph-key';
 import type { MemberActor } from './graphs';
 import { assertRoomForSweep, lockMemberSubmissions } from './active-runs';
-import { limitsOf } from './run-limits';
+import { limitsOf, tooLargeFor } from './run-limits';
 import { queryRows } from './run-row';
-import { specTextOf } from './run-spec';
+import { plannedSize, specTextOf } from './run-spec';
 import { insertRun } from './runs';
 import { distinctRuns, sweepCells } from './sweeps-cells';
 import { loadSweepView } from './sweeps-view';
@@ -22,12 +22,6 @@ const MINIMUM: Record<SweepRequest['family'], { rows: number; cols: number }> = 
   cylinder: { rows: 1, cols: 3 },
   torus: { rows: 3, cols: 3 },
 };
-
-/** Vertices and edges of a cell: a grid, a cylinder (columns closed into cycles) or a torus. */
-function cellSize(family: SweepRequest['family'], rows: number, cols: number): { vertices: number; edges: number } {
-  const vertices = rows * cols;
-  return { vertices, edges: family === 'grid' ? 2 * vertices - rows - cols : family === 'cylinder' ? 2 * vertices - cols : 2 * vertices };
-}
 
 /**
  * POST /api/v1/sweeps: one run per distinct graph of the table, all inserted with their jobs in one
@@ -44,16 +38,9 @@ export async function createSweep(ctx: ServerContext, source: DataSource, actor:
   if (cellCount > MAX_SWEEP_CELLS) throw field('body.cols.to', `the sweep has ${cellCount} cells; a sweep may have at most ${MAX_SWEEP_CELLS} (split it into several)`);
   // The largest cell (rowsTo x colsTo) has the most vertices and edges; the role's graph limit applies to it.
   const limits = limitsOf(ctx.config, actor.user.role);
-  const largest = cellSize(request.family, ranges.rowsTo, ranges.colsTo);
-  if (largest.vertices > limits.runVertices || largest.edges > limits.runEdges) {
-    const has = largest.vertices > limits.runVertices ? `${largest.vertices} vertices` : `${largest.edges} edges`;
-    throw new HttpError(
-      413,
-      'graph_too_large',
-      `body.cols.to: the largest cell, ${ranges.rowsTo} x ${ranges.colsTo}, has ${has}; a ${actor.user.role} may run graphs of at most ${limits.runVertices} vertices and ${limits.runEdges} edges`,
-      { problems: [{ field: 'body.cols.to', message: 'a cell is too large for a run' }] },
-    );
-  }
+  const largest = plannedSize({ family: request.family, rows: ranges.rowsTo, cols: ranges.colsTo });
+  const tooLarge = tooLargeFor(`body.cols.to: the largest cell, ${ranges.rowsTo} x ${ranges.colsTo},`, largest.vertices, largest.edges, actor.user.role, limits);
+  if (tooLarge) throw new HttpError(413, 'graph_too_large', tooLarge, { problems: [{ field: 'body.cols.to', message: 'a cell is too large for a run' }] });
   const runs = distinctRuns(sweepCells(ranges));
   const name = request.name ?? `${request.family} ${ranges.rowsFrom}..${ranges.rowsTo} x ${ranges.colsFrom}..${ranges.colsTo}`;
   const visibility = request.visibility ?? 'private';
@@ -70,7 +57,7 @@ export async function createSweep(ctx: ServerContext, source: DataSource, actor:
     );
     for (const { rows, cols } of runs) {
       const spec = { family: request.family, rows, cols };
-      const { vertices, edges } = cellSize(request.family, rows, cols);
+      const { vertices, edges } = plannedSize(spec);
       await insertRun(manager, {
         ownerId: actor.user.id,
         graph: { spec, specText: specTextOf(spec), key: graphKeyOf(spec), graphId: null, vertexCount: vertices, edgeCount: edges },
