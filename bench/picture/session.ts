@@ -3,7 +3,7 @@ import { chromium, type Browser, type Page } from 'playwright-core';
 import { buildPicturePage } from './build-page';
 import { launchChromium } from '@cairn/tests/chromium';
 import type { BenchGlobal, PictureBench } from './page/protocol';
-import { serveDirectory } from './serve-dir';
+import { preview } from 'vite';
 
 export interface PictureSession {
   page: Page;
@@ -17,7 +17,10 @@ export const VIEWPORT = { width: 1280, height: 900 };
 /** Builds the bench page, serves it on loopback and opens it in Debian's Chromium. */
 export async function openPictureSession(): Promise<PictureSession> {
   const dir = await buildPicturePage();
-  const server = await serveDirectory(dir);
+  // Vite's own preview server for the build, on a free loopback port (module scripts need http).
+  const server = await preview({ configFile: false, logLevel: 'warn', build: { outDir: dir }, preview: { host: '127.0.0.1', port: 0, strictPort: true } });
+  const url = server.resolvedUrls?.local[0];
+  if (!url) throw new Error('the preview server named no loopback address');
   const browser = await launchChromium(chromium);
   const close = async () => {
     await browser.close();
@@ -26,7 +29,7 @@ export async function openPictureSession(): Promise<PictureSession> {
   };
   try {
     const page = await browser.newPage({ viewport: VIEWPORT, deviceScaleFactor: 1 });
-    await page.goto(server.url);
+    await page.goto(url);
     await page.waitForSelector('body[data-ready]', { state: 'attached' });
     return { page, browser, close };
   } catch (err) {
