@@ -1,5 +1,5 @@
 import { mkdirSync, writeFileSync } from 'node:fs';
-import os from 'node:os';
+import { machineDescription } from './machine';
 import { exactTreeDepth, gridGraph, maskGraph, randomGraph, staircaseGraph, type Graph } from '@cairn/engine';
 
 // The exact search's benchmark cases (timed runs, not benchmark.js: one run can take seconds). Each run
@@ -53,7 +53,7 @@ const rows = cases.map(([name, g, targetMs]) => {
 
 const out = {
   recordedAt: new Date().toISOString(),
-  machine: { cpus: os.cpus().length, cpuModel: os.cpus()[0]?.model ?? 'unknown', node: process.version, memoryGiB: Math.round(os.totalmem() / 2 ** 30) },
+  machine: machineDescription(),
   timeLimitMs: limitMs,
   cases: rows,
 };

@@ -1,4 +1,5 @@
 import Benchmark from 'benchmark';
+import { median } from './machine';
 
 /** One measured case, as written to bench/results/. */
 export interface CaseFigures {
@@ -16,11 +17,6 @@ export interface CaseFigures {
 /** A case: the function to time, or the function with a target median in milliseconds. */
 export type BenchCase = (() => void) | { run: () => void; targetMs: number };
 
-function median(sample: readonly number[]): number {
-  const sorted = [...sample].sort((a, b) => a - b);
-  const mid = sorted.length >> 1;
-  return sorted.length % 2 ? sorted[mid]! : (sorted[mid - 1]! + sorted[mid]!) / 2;
-}
 
 /** Runs benchmark.js cases one after another; maxTime keeps a whole suite to seconds, not minutes. */
 export function runCases(cases: Record<string, BenchCase>, maxTime: number): CaseFigures[] {

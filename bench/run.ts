@@ -1,5 +1,5 @@
 import { existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
-import os from 'node:os';
+import { machineDescription } from './machine';
 import { boundsSuite, meshReport } from './suites/bounds';
 import { constructionsReport, constructionsSuite } from './suites/constructions';
 import { edgeSuite } from './suites/edge';
@@ -28,7 +28,7 @@ const previous = only && existsSync(file) ? JSON.parse(readFileSync(file, 'utf8'
 const results = {
   recordedAt: new Date().toISOString(),
   ...(only ? { suitesRun: only } : {}),
-  machine: { cpus: os.cpus().length, cpuModel: os.cpus()[0]?.model ?? 'unknown', node: process.version, memoryGiB: Math.round(os.totalmem() / 2 ** 30) },
+  machine: machineDescription(),
   mesh: runs('bounds') ? meshReport() : previous.mesh,
   // Reported before its suite runs, so the first-call times are of a fresh process.
   constructions: runs('constructions') ? constructionsReport() : previous.constructions,

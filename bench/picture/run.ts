@@ -2,7 +2,7 @@
 // grids ranked by the engine's midline split and writes bench/results/picture.json. Issue #8's target:
 // the 300 x 300 picture draws in under a second.
 import { mkdirSync, writeFileSync } from 'node:fs';
-import os from 'node:os';
+import { machineDescription } from '../machine';
 import type { MountTiming, PictureCase, SyncMountTiming } from './page/protocol';
 import { hoverPair, verifiedGridCase } from './grid-cases';
 import { callBench, openPictureSession, VIEWPORT } from './session';
@@ -58,7 +58,7 @@ try {
 const target = sizes.find((s) => s.grid === `${TARGET_SIDE}x${TARGET_SIDE}`);
 const results = {
   recordedAt: new Date().toISOString(),
-  machine: { cpus: os.cpus().length, cpuModel: os.cpus()[0]?.model ?? 'unknown', node: process.version, memoryGiB: Math.round(os.totalmem() / 2 ** 30) },
+  machine: machineDescription(),
   browser: { name: 'Debian Chromium', version: browser.version(), headless: true, gpu: false, viewport: VIEWPORT, deviceScaleFactor: 1 },
   page: 'a Vite production build of bench/picture/page: apps/web RankingPicture with the app stylesheet',
   rankings: 'midline split (engine midlineSplitRanking), checked by verifyRanking; hover uses its elimination forest',
