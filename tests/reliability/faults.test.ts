@@ -111,6 +111,10 @@ describe('faults', () => {
   // interval and ranking, while the other runs finish and the server's own thread is untouched.
   it('ends a run whose search reaches the engine memory limit with its proven interval; the others finish, the server stays up', async () => {
     const key = await insertMemberWithKey('faults-memory', 'researcher');
+    // Only the memory-limited server may take this run: the queue is shared, so the first test's server
+    // (no limit) would otherwise race it for the job and run the search to its time limit.
+    await server?.stop();
+    server = undefined;
     const heapMb = 96;
     const oomServer = await startBuiltServer({ ...env, CAIRN_RUN_CONCURRENCY: '2', CAIRN_ENGINE_THREADS: '2', CAIRN_ENGINE_MEMORY_MB: String(heapMb) });
     try {
