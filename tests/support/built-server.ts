@@ -12,11 +12,14 @@ export interface BuiltServer {
 
 export const builtServerEntry = join(repoRoot, 'apps/server/dist/main.js');
 
+/** Extra Node.js flags for the server under test (e.g. --cpu-prof when profiling a suite), space-separated. */
+const nodeArgs = () => (process.env.CAIRN_SERVER_NODE_ARGS ?? '').split(' ').filter(Boolean);
+
 /** Runs the built server (`node apps/server/dist/main.js`) as its own process on free loopback ports. */
 export async function startBuiltServer(extraEnv: Record<string, string> = {}): Promise<BuiltServer> {
   const [port, devPort, smtpPort] = [await freePort(), await freePort(), await freePort()];
   const env = { ...process.env, ...serverEnv({ CAIRN_PORT: String(port), CAIRN_DEV_PORT: String(devPort), CAIRN_SMTP_PORT: String(smtpPort), ...extraEnv }) };
-  const child = spawn(process.execPath, [builtServerEntry], { env, stdio: ['ignore', 'pipe', 'pipe'] });
+  const child = spawn(process.execPath, [...nodeArgs(), builtServerEntry], { env, stdio: ['ignore', 'pipe', 'pipe'] });
   let out = '';
   child.stdout!.on('data', (b: Buffer) => (out += b.toString()));
   child.stderr!.on('data', (b: Buffer) => (out += b.toString()));

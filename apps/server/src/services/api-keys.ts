@@ -4,6 +4,7 @@ import { IsNull, type DataSource } from 'typeorm';
 import { ApiKey } from '../entities/api-key.entity';
 import { User } from '../entities/user.entity';
 import { UnknownMemberError } from './members';
+import { preparedRows } from '../db/prepared-rows';
 
 /** Every secret starts so; a reader (or a secret scanner) recognises a Cairn key by it. */
 export const KEY_SECRET_PREFIX = 'cairn_';
@@ -128,24 +129,39 @@ interface UsedKeyRow {
 }
 
 /**
- * Marks the live key with this hash as used and reads it with its owner, in one statement (one round trip
- * and one index lookup on the unique secret_hash): a revoked key matches no row, so it is refused from the
- * first request after its revocation committed.
+ * How fine a key's "last used" is, in seconds: a use writes it only when the stored one is older than
+ * this. Writing it on every request made every request of a busy key wait for the one before it on
+ * that row's lock and a WAL flush (the load test's run-detail p99 with one key at 50 connections); a
+ * minute is fine enough to tell a key in use from an idle one.
  */
-const USE_KEY = `WITH used AS (
-    UPDATE api_keys SET last_used_at = now() WHERE secret_hash = $1 AND revoked_at IS NULL
-    RETURNING id, user_id, name, prefix, secret_hash, scopes, created_by, created_at, last_used_at, revoked_at
-  )
-  SELECT used.*, u.github_id AS u_github_id, u.login AS u_login, u.display_name AS u_display_name, u.email AS u_email,
-    u.role AS u_role, u.notify_on_finish AS u_notify_on_finish, u.created_at AS u_created_at, u.updated_at AS u_updated_at
-  FROM used JOIN users u ON u.id = used.user_id`;
+export const KEY_USE_PRECISION_SECONDS = 60;
 
 /**
- * The live key with this secret and its owner, marked as used now; undefined for an unknown or revoked
- * secret. Looked up on every request (no cache), so a revocation takes effect at once.
+ * Reads the live key with this hash and its owner, and marks it used when its last use is older than
+ * KEY_USE_PRECISION_SECONDS, in one statement (one round trip, one index lookup on the unique
+ * secret_hash): a revoked key matches no row, so it is refused from the first request after its
+ * revocation committed.
+ */
+const USE_KEY = `WITH live AS (
+    SELECT id, user_id, name, prefix, secret_hash, scopes, created_by, created_at, last_used_at, revoked_at
+    FROM api_keys WHERE secret_hash = $1 AND revoked_at IS NULL
+  ), used AS (
+    UPDATE api_keys k SET last_used_at = now() FROM live
+    WHERE k.id = live.id AND (live.last_used_at IS NULL OR live.last_used_at < now() - make_interval(secs => $2))
+    RETURNING k.id, k.last_used_at
+  )
+  SELECT live.id, live.user_id, live.name, live.prefix, live.secret_hash, live.scopes, live.created_by, live.created_at,
+    COALESCE(used.last_used_at, live.last_used_at) AS last_used_at, live.revoked_at,
+    u.github_id AS u_github_id, u.login AS u_login, u.display_name AS u_display_name, u.email AS u_email,
+    u.role AS u_role, u.notify_on_finish AS u_notify_on_finish, u.created_at AS u_created_at, u.updated_at AS u_updated_at
+  FROM live JOIN users u ON u.id = live.user_id LEFT JOIN used ON used.id = live.id`;
+
+/**
+ * The live key with this secret and its owner, its use recorded to the minute; undefined for an unknown
+ * or revoked secret. Looked up on every request (no cache), so a revocation takes effect at once.
  */
 export async function useApiKey(source: DataSource, secret: string): Promise<{ key: ApiKey; user: User } | undefined> {
-  const [row] = (await source.query(USE_KEY, [hashKeySecret(secret)])) as UsedKeyRow[];
+  const [row] = await preparedRows<UsedKeyRow>(source, USE_KEY, [hashKeySecret(secret), KEY_USE_PRECISION_SECONDS]);
   if (!row) return undefined;
   const key = Object.assign(new ApiKey(), {
     id: row.id,

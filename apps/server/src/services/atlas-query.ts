@@ -3,6 +3,7 @@ import type { AtlasEntryView, AtlasList, AtlasQuery } from '@cairn/schema';
 import type { DataSource } from 'typeorm';
 import { HttpError } from '../http/errors';
 import { graphKeyOf } from './graph-key';
+import { preparedRows } from '../db/prepared-rows';
 import { queryRows } from './run-row';
 
 interface AtlasRow {
@@ -63,8 +64,10 @@ export async function listAtlas(source: DataSource, q: AtlasQuery): Promise<Atla
   if (q.colsTo !== undefined) where.push(`${size('cols')} <= ${param(q.colsTo)}`);
   if (q.exact !== undefined) where.push(`exact = ${param(q.exact)}`);
   const filter = where.length ? `WHERE ${where.join(' AND ')}` : '';
-  const [{ total }] = (await queryRows<{ total: number }>(source, `SELECT count(*)::int AS total FROM atlas_entries ${filter}`, params)) as [{ total: number }];
-  const rowsFound = await queryRows<AtlasRow>(
+  const [{ total }] = (await preparedRows<{ total: number }>(source, `SELECT count(*)::int AS total FROM atlas_entries ${filter}`, params)) as [{ total: number }];
+  // Prepared statements: the texts come from the filter's shape alone (values are parameters), so
+  // there are a bounded number of them, and the atlas is the most read page.
+  const rowsFound = await preparedRows<AtlasRow>(
     source,
     `SELECT * FROM atlas_entries ${filter}
      ORDER BY family, ${size('rows')} NULLS LAST, ${size('cols')} NULLS LAST, vertex_count, graph_key

@@ -1,5 +1,6 @@
 import type { RunStatus, SolveMethod, Visibility } from '@cairn/schema';
 import type { DataSource, EntityManager } from 'typeorm';
+import { preparedRows } from '../db/prepared-rows';
 
 /**
  * A run as the queries of the run services read it: the runs table (with the queue's columns, which the
@@ -54,8 +55,10 @@ export async function queryRows<T>(db: DataSource | EntityManager, sql: string, 
   return raw as T[];
 }
 
-/** One whole run by id, or undefined. */
+const LOAD_RUN = `SELECT ${RUN_COLUMNS} ${RUN_FROM} WHERE r.id = $1`;
+
+/** One whole run by id, or undefined (a prepared statement: the run page and its API read it often). */
 export async function loadRunRow(db: DataSource | EntityManager, id: string): Promise<RunRow | undefined> {
-  const [row] = await queryRows<RunRow>(db, `SELECT ${RUN_COLUMNS} ${RUN_FROM} WHERE r.id = $1`, [id]);
+  const [row] = await preparedRows<RunRow>(db, LOAD_RUN, [id]);
   return row;
 }
