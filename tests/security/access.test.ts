@@ -347,17 +347,27 @@ describe("a private run of another researcher", () => {
     expect((await call('GET', `/api/v1/runs/${runId}`, { cookie: sessions['ines-marlow']!.cookie })).status).toBe(200);
   }, 60_000);
 
-  it('reaches the public atlas only as the graph’s value and a bare run id that leads to 404 (no owner, no certificate)', async () => {
+  it('reaches the public atlas only as the graph’s value: no run id, no owner, no certificate (its owner and admins see the id)', async () => {
     const entry = await call('GET', '/api/v1/atlas/path%3A59');
     expect(entry.status).toBe(200);
     const ownerId = (await sql<{ owner_id: string }>(`SELECT owner_id FROM runs WHERE id = $1`, [runId]))[0]!.owner_id;
-    // Observation (see the report): the atlas names the private run that proved the value by its id.
-    const view = JSON.parse(entry.text) as { upperRunId: string | null; lowerRunId: string | null };
-    expect(view.upperRunId).toBe(runId);
-    expect(entry.text).not.toContain(ownerId);
-    expect(entry.text).not.toContain('tobias');
-    expect(entry.text).not.toContain('"labels"');
-    for (const who of strangers()) expect((await call('GET', `/api/v1/runs/${runId}`, who.headers)).status).toBe(404);
+    const [stored] = await sql<{ upper_run_id: string | null }>(`SELECT upper_run_id FROM atlas_entries WHERE graph_key = 'path:59'`);
+    expect(stored!.upper_run_id, 'the atlas keeps the private run that proved the value').toBe(runId);
+    const view = JSON.parse(entry.text) as { upperRunId: string | null; lowerRunId: string | null; rankNumber: number | null };
+    expect(view.rankNumber).not.toBeNull();
+    expect([view.upperRunId, view.lowerRunId]).toEqual([null, null]);
+    for (const text of [entry.text, (await call('GET', '/api/v1/atlas?family=path')).text, (await call('GET', '/api/v1/quick?spec=path%3A59')).text]) {
+      expect(text).not.toContain(runId);
+      expect(text).not.toContain(ownerId);
+      expect(text).not.toContain('tobias');
+      expect(text).not.toContain('"labels"');
+    }
+    for (const who of strangers()) {
+      expect((await call('GET', '/api/v1/atlas/path%3A59', who.headers)).text, who.name).not.toContain(runId);
+      expect((await call('GET', `/api/v1/runs/${runId}`, who.headers)).status).toBe(404);
+    }
+    expect((JSON.parse((await call('GET', '/api/v1/atlas/path%3A59', ownerKey())).text) as { upperRunId: string }).upperRunId, 'the owner').toBe(runId);
+    expect((JSON.parse((await call('GET', '/api/v1/atlas/path%3A59', { cookie: sessions['ines-marlow']!.cookie })).text) as { upperRunId: string }).upperRunId, 'an admin').toBe(runId);
   }, 60_000);
 
   it('has no share link while private; a link made and then revoked (private again) is dead on every shared route', async () => {

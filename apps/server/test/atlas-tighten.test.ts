@@ -11,16 +11,20 @@ vi.setConfig({ testTimeout: 90_000, hookTimeout: 60_000 });
 let h: RunsHarness;
 let alice: string;
 let bob: string;
+/** An admin's key: the entries below name every proving run (they are private by default) only to the runs' owners and admins. */
+let admin: string;
 
 beforeAll(async () => {
   h = await startRunsHarness('atlas_tighten', { workers: true });
   alice = (await insertMemberWithKey(h.source, 'alice-atlas', 'researcher')).authorization;
   bob = (await insertMemberWithKey(h.source, 'bob-atlas', 'researcher')).authorization;
+  admin = (await insertMemberWithKey(h.source, 'ada-atlas', 'admin')).authorization;
 });
 afterAll(() => h?.close());
 
 const run = async (authorization: string, body: unknown) => waitForRun(h, (await api<RunView>(h, 'POST', '/api/v1/runs', authorization, body)).body.id, authorization);
-const entry = async (key: string) => (await api<AtlasEntryView>(h, 'GET', `/api/v1/atlas/${encodeURIComponent(key)}`)).body;
+/** An entry as a reader sees it: the admin by default, null for an anonymous reader. */
+const entry = async (key: string, authorization: string | null = admin) => (await api<AtlasEntryView>(h, 'GET', `/api/v1/atlas/${encodeURIComponent(key)}`, authorization ?? undefined)).body;
 
 describe('tightening by runs', () => {
   it('records a bounds run, tightens to exact with an exact run, and a later weaker run changes nothing', async () => {
@@ -125,6 +129,28 @@ describe('reading the atlas', () => {
     const page = await api<AtlasList>(h, 'GET', '/api/v1/atlas?family=grid&limit=2');
     expect(page.body).toMatchObject({ total: 3, nextOffset: 2 });
     expect((await api<AtlasList>(h, 'GET', '/api/v1/atlas?family=grid&limit=2&offset=2')).body.entries.map((e) => e.graphKey)).toEqual(['grid:9x11']);
+  });
+
+  it('names a proving run only to readers who may open it (its owner, an admin, anyone once it is public)', async () => {
+    const [row] = (await h.source.query(`SELECT lower_run_id FROM atlas_entries WHERE graph_key = 'grid:5x5'`)) as { lower_run_id: string }[];
+    const runId = row!.lower_run_id;
+    const seen = async (authorization: string | null) => {
+      const one = await entry('grid:5x5', authorization);
+      const listed = (await api<AtlasList>(h, 'GET', '/api/v1/atlas?family=grid&rows=5&cols=5', authorization ?? undefined)).body.entries[0]!;
+      const quick = (await api<{ lowerRunId: string | null }>(h, 'GET', '/api/v1/quick?spec=grid%3A5x5', authorization ?? undefined)).body;
+      expect(listed).toMatchObject({ graphKey: 'grid:5x5', lowerRunId: one.lowerRunId });
+      expect(quick.lowerRunId).toBe(one.lowerRunId);
+      expect(one.exact).toBe(true);
+      return one.lowerRunId;
+    };
+    expect(await seen(null), 'anonymous').toBeNull();
+    expect(await seen(bob), 'another researcher').toBeNull();
+    expect(await seen(alice), 'its owner').toBe(runId);
+    expect(await seen(admin), 'an admin').toBe(runId);
+    const published = await api<RunView>(h, 'PATCH', `/api/v1/runs/${runId}`, alice, { visibility: 'public' });
+    expect(published.status).toBe(200);
+    expect(await seen(null), 'anonymous, once public').toBe(runId);
+    expect(await seen(bob), 'another researcher, once public').toBe(runId);
   });
 
   it('names a bad filter and says 404 for a graph it does not know', async () => {

@@ -267,6 +267,7 @@ export const AtlasEntryView = z.object({
   rankNumber: z.number().int().nullable(),
   lowerProvenance: z.record(z.string(), z.unknown()),
   upperProvenance: z.record(z.string(), z.unknown()),
+  /** The runs that proved each side; null when the reader may not open that run (or it was deleted). */
   lowerRunId: z.uuid().nullable(),
   upperRunId: z.uuid().nullable(),
   updatedAt: z.iso.datetime(),

@@ -2,10 +2,10 @@ import { AtlasEntryView, AtlasKeyParams, AtlasList, AtlasQuery } from '@cairn/sc
 import { Router } from 'express';
 import type { AppContext } from '../app';
 import { connectOrUnavailable } from '../db/connect-or-unavailable';
-import { requirePermission } from '../auth/require';
+import { actorOf, requirePermission } from '../auth/require';
 import { parseParams, parseQuery } from '../http/validate';
 import { documentRoute } from '../openapi/route-docs';
-import { findAtlasEntry, listAtlas } from '../services/atlas-query';
+import { atlasReaderOf, findAtlasEntry, listAtlas } from '../services/atlas-query';
 
 const TAG = 'atlas';
 
@@ -24,14 +24,14 @@ export function atlasRouter(ctx: AppContext): Router {
   });
   router.get('/atlas', requirePermission('atlas:read'), async (req, res) => {
     const query = parseQuery(AtlasQuery, req);
-    const body: AtlasList = await listAtlas(await connectOrUnavailable(ctx.db), query);
+    const body: AtlasList = await listAtlas(await connectOrUnavailable(ctx.db), query, atlasReaderOf(actorOf(req)));
     res.json(body);
   });
 
   documentRoute({ method: 'get', path: '/api/v1/atlas/:key', tag: TAG, summary: 'One atlas entry, by its key or any spec of the same graph (grid:9x4 finds grid:4x9)', needs: 'atlas:read', params: AtlasKeyParams, response: AtlasEntryView, errors: [404] });
   router.get('/atlas/:key', requirePermission('atlas:read'), async (req, res) => {
     const { key } = parseParams(AtlasKeyParams, req);
-    const body: AtlasEntryView = await findAtlasEntry(await connectOrUnavailable(ctx.db), key);
+    const body: AtlasEntryView = await findAtlasEntry(await connectOrUnavailable(ctx.db), key, atlasReaderOf(actorOf(req)));
     res.json(body);
   });
 

@@ -2,7 +2,8 @@ import { connectOrUnavailable } from '../db/connect-or-unavailable';
 import { QuickAnswer, QuickQuery } from '@cairn/schema';
 import { Router } from 'express';
 import type { AppContext } from '../app';
-import { requirePermission } from '../auth/require';
+import { actorOf, requirePermission } from '../auth/require';
+import { atlasReaderOf } from '../services/atlas-query';
 import { parseQuery } from '../http/validate';
 import { documentRoute } from '../openapi/route-docs';
 import { quickAnswer } from '../services/quick-answer';
@@ -21,7 +22,7 @@ export function quickRouter(ctx: AppContext): Router {
   });
   router.get('/quick', requirePermission('atlas:read'), async (req, res) => {
     const { spec } = parseQuery(QuickQuery, req);
-    res.json(await quickAnswer(await connectOrUnavailable(ctx.db), spec));
+    res.json(await quickAnswer(await connectOrUnavailable(ctx.db), spec, atlasReaderOf(actorOf(req))));
   });
   return router;
 }

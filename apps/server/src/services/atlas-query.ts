@@ -1,10 +1,10 @@
 import { EngineError, parseGraphSpec } from '@cairn/engine';
 import type { AtlasEntryView, AtlasList, AtlasQuery } from '@cairn/schema';
 import type { DataSource } from 'typeorm';
+import { seesEveryRun, type Actor } from '../auth/actor';
 import { HttpError } from '../http/errors';
 import { graphKeyOf } from './graph-key';
 import { preparedRows } from '../db/prepared-rows';
-import { queryRows } from './run-row';
 
 interface AtlasRow {
   graph_key: string;
@@ -41,11 +41,35 @@ function toView(r: AtlasRow): AtlasEntryView {
   };
 }
 
+/** Who reads the atlas: an entry names a run that proved a side only to a reader who may open that run. */
+export interface AtlasReader {
+  userId: string | null;
+  seesEveryRun: boolean;
+}
+
+/** The reader of a request (anonymous readers see the ids of public runs only). */
+export function atlasReaderOf(actor: Actor): AtlasReader {
+  return actor.kind === 'anonymous' ? { userId: null, seesEveryRun: false } : { userId: actor.user.id, seesEveryRun: seesEveryRun(actor) };
+}
+
+/**
+ * A proving run's id, or null when the reader may not open that run (the rule of canSeeRun: public, the
+ * reader's own, or any for an admin): the values are public, the private runs behind them are not, and
+ * not even their ids should say that they exist. `user` and `admin` are the reader's parameters.
+ */
+const visibleRunId = (column: 'lower_run_id' | 'upper_run_id', user: string, admin: string) =>
+  `CASE WHEN EXISTS (SELECT 1 FROM runs r WHERE r.id = a.${column} AND (r.visibility = 'public' OR r.owner_id = ${user}::uuid OR ${admin}::boolean))
+    THEN a.${column} END AS ${column}`;
+
+const entryColumns = (user: string, admin: string) =>
+  `a.graph_key, a.family, a.sizes, a.vertex_count, a.edge_count, a.lower, a.upper, a.exact, a.lower_provenance, a.upper_provenance,
+   ${visibleRunId('lower_run_id', user, admin)}, ${visibleRunId('upper_run_id', user, admin)}, a.updated_at`;
+
 /** Families whose key puts the smaller size first (a grid and its transpose are one entry). */
 const TRANSPOSABLE = new Set(['grid', 'torus']);
 
 /** GET /api/v1/atlas: filtered by family, sizes (exact or ranges) and exactness; ordered by family and size. */
-export async function listAtlas(source: DataSource, q: AtlasQuery): Promise<AtlasList> {
+export async function listAtlas(source: DataSource, q: AtlasQuery, reader: AtlasReader): Promise<AtlasList> {
   const where: string[] = [];
   const params: unknown[] = [];
   const param = (v: unknown) => {
@@ -69,7 +93,7 @@ export async function listAtlas(source: DataSource, q: AtlasQuery): Promise<Atla
   // there are a bounded number of them, and the atlas is the most read page.
   const rowsFound = await preparedRows<AtlasRow>(
     source,
-    `SELECT * FROM atlas_entries ${filter}
+    `SELECT ${entryColumns(param(reader.userId), param(reader.seesEveryRun))} FROM atlas_entries a ${filter}
      ORDER BY family, ${size('rows')} NULLS LAST, ${size('cols')} NULLS LAST, vertex_count, graph_key
      LIMIT ${param(q.limit)} OFFSET ${param(q.offset)}`,
     params,
@@ -78,11 +102,13 @@ export async function listAtlas(source: DataSource, q: AtlasQuery): Promise<Atla
   return { entries: rowsFound.map(toView), total, nextOffset: next < total ? next : null };
 }
 
+const FIND_ENTRY = `SELECT ${entryColumns('$2', '$3')} FROM atlas_entries a WHERE a.graph_key = ANY($1) LIMIT 1`;
+
 /**
  * GET /api/v1/atlas/:key: by the atlas key, or by any text spec of the same graph (grid:9x4 finds the
  * entry grid:4x9).
  */
-export async function findAtlasEntry(source: DataSource, key: string): Promise<AtlasEntryView> {
+export async function findAtlasEntry(source: DataSource, key: string, reader: AtlasReader): Promise<AtlasEntryView> {
   const keys = [key];
   try {
     const spec = parseGraphSpec(key);
@@ -90,7 +116,7 @@ export async function findAtlasEntry(source: DataSource, key: string): Promise<A
   } catch (err) {
     if (!(err instanceof EngineError)) throw err;
   }
-  const [row] = await queryRows<AtlasRow>(source, `SELECT * FROM atlas_entries WHERE graph_key = ANY($1) LIMIT 1`, [keys]);
+  const [row] = await preparedRows<AtlasRow>(source, FIND_ENTRY, [keys, reader.userId, reader.seesEveryRun]);
   if (!row) throw new HttpError(404, 'not_found', `the atlas has no entry for ${key}`);
   return toView(row);
 }

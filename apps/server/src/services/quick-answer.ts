@@ -2,7 +2,7 @@ import { bestLowerBound, bestUpperBound, EngineError, formulaFor, graphFromSpec,
 import type { QuickAnswer } from '@cairn/schema';
 import type { DataSource } from 'typeorm';
 import { HttpError } from '../http/errors';
-import { findAtlasEntry } from './atlas-query';
+import { findAtlasEntry, type AtlasReader } from './atlas-query';
 import { graphKeyOf } from './graph-key';
 
 /** Beyond this many vertices the constructions are not "at once" in a request; queue a run instead. */
@@ -15,7 +15,7 @@ const describe = (p: Record<string, unknown>) => (typeof p.argument === 'string'
  * the best construction and lower bound computed on the spot. Every number is computed or looked up,
  * never assumed; an upper bound from a construction comes from a ranking the engine built.
  */
-export async function quickAnswer(source: DataSource, specText: string): Promise<QuickAnswer> {
+export async function quickAnswer(source: DataSource, specText: string, reader: AtlasReader): Promise<QuickAnswer> {
   let spec;
   try {
     spec = parseGraphSpec(specText);
@@ -29,7 +29,7 @@ export async function quickAnswer(source: DataSource, specText: string): Promise
     });
   }
   const key = graphKeyOf(spec);
-  const known = await findAtlasEntry(source, key.key).catch((err: unknown) => {
+  const known = await findAtlasEntry(source, key.key, reader).catch((err: unknown) => {
     if (err instanceof HttpError && err.status === 404) return undefined;
     throw err;
   });
