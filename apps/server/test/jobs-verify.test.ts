@@ -33,14 +33,19 @@ class MisreportingPool extends EnginePool {
 }
 
 describe('re-verification on the server', () => {
-  it('names what is wrong with a certificate', () => {
+  it('names what is wrong with a certificate (checked on the engine pool)', async () => {
     const input = { spec: { family: 'path' as const, n: 8 }, files: {} };
     const s = solve(graphFromSpec(input.spec));
-    expect(rejectCertificate(input, s)).toBeUndefined();
-    expect(rejectCertificate(input, { ...s, labels: s.labels.slice(1) })).toBe('the certificate has 7 labels for 8 vertices');
-    expect(rejectCertificate(input, { ...s, labels: s.labels.map(() => 1) })).toMatch(/^the certificate is not a ranking: vertices \d and \d both have label 1/);
-    expect(rejectCertificate(input, { ...s, upper: s.upper + 1 })).toBe(`the certificate uses ${s.upper} labels but claims an upper bound of ${s.upper + 1}`);
-    expect(rejectCertificate(input, { ...s, rankNumber: s.upper + 1 })).toMatch(/^the rank number/);
+    const pool = new EnginePool({ size: 1 });
+    try {
+      expect(await rejectCertificate(pool, input, s)).toBeUndefined();
+      expect(await rejectCertificate(pool, input, { ...s, labels: s.labels.slice(1) })).toMatch(/^the certificate is not one label per vertex: expected 8 labels.*got 7$/);
+      expect(await rejectCertificate(pool, input, { ...s, labels: s.labels.map(() => 1) })).toMatch(/^the certificate is not a ranking: vertices \d and \d both have label 1/);
+      expect(await rejectCertificate(pool, input, { ...s, upper: s.upper + 1 })).toBe(`the certificate uses ${s.upper} labels but claims an upper bound of ${s.upper + 1}`);
+      expect(await rejectCertificate(pool, input, { ...s, rankNumber: s.upper + 1 })).toMatch(/^the rank number/);
+    } finally {
+      await pool.close();
+    }
   });
 
   it('fails a run whose worker claims a certificate that is not a ranking, and keeps it out of the atlas', async () => {

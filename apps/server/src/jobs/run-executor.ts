@@ -1,9 +1,9 @@
-import { EngineError, verifyRanking, type Solution } from '@cairn/engine';
+import { EngineError, type Solution } from '@cairn/engine';
 import type { EnginePool, ExactProgress } from '@cairn/engine/pool';
 import type { DataSource } from 'typeorm';
 import type { ServerContext } from '../context';
 import { notifyRunFinished } from '../mail/notifications';
-import { buildGraph, engineInputOf, type EngineInput } from '../services/run-engine-input';
+import { engineInputOf, type EngineInput } from '../services/run-engine-input';
 import { queryRows } from '../services/run-row';
 import { claimRun, MAX_RUN_ATTEMPTS, type ClaimedRun } from './run-claim';
 import { enqueueRun } from './run-queue';
@@ -28,14 +28,22 @@ export interface ExecutorDeps {
 type StopReason = 'cancel' | 'closing' | 'lost';
 
 /**
- * The server's own check of a worker's answer, on the graph built here from the run's spec: the labels
- * are a ranking of that graph (verifyRanking), use exactly `upper` labels, one per vertex, and the
- * interval is consistent. A reason when it fails, else undefined.
+ * The server's own check of a worker's answer, on the graph built from the run's spec: the labels are a
+ * ranking of that graph (verifyRanking), use exactly `upper` labels, one per vertex, and the interval is
+ * consistent. A reason when it fails, else undefined. The graph is built and checked on the engine's
+ * worker pool (a 10^6-vertex certificate takes a few hundred ms, which the event loop must not spend);
+ * the pool has a thread free, since the search that produced the answer has just given its thread back.
  */
-export function rejectCertificate(input: EngineInput, s: Solution): string | undefined {
-  const graph = buildGraph(input);
-  if (s.labels.length !== graph.vertexCount) return `the certificate has ${s.labels.length} labels for ${graph.vertexCount} vertices`;
-  const verdict = verifyRanking(graph, s.labels);
+export async function rejectCertificate(pool: EnginePool, input: EngineInput, s: Solution): Promise<string | undefined> {
+  let answer;
+  try {
+    answer = await pool.run({ kind: 'verify', spec: input.spec, files: input.files, labels: s.labels });
+  } catch (err) {
+    if (err instanceof EngineError && err.code === 'label_error') return `the certificate is not one label per vertex: ${err.message}`;
+    return `the server could not re-verify it: ${err instanceof Error ? err.message : String(err)}`;
+  }
+  if (answer.kind !== 'verify') return 'the engine answered a verify task with something else';
+  const { verdict } = answer;
   if (!verdict.valid) {
     const v = verdict.violation;
     return `the certificate is not a ranking: vertices ${v.u} and ${v.v} both have label ${v.label} and are joined by a path of smaller labels`;
@@ -97,7 +105,7 @@ export async function executeRunJob(deps: ExecutorDeps, runId: string): Promise<
     stored = outcome.stop === 'cancel' ? await storeCancelled(source, run) : await storeFailure(source, run, outcome.error);
     log.warn({ error: outcome.error, cancelled: outcome.stop === 'cancel' }, 'run ended without a result');
   } else {
-    const rejected = rejectCertificate(input, outcome.solution);
+    const rejected = await rejectCertificate(deps.pool, input, outcome.solution);
     if (rejected) {
       stored = await storeFailure(source, run, { code: 'certificate_rejected', message: `the server's re-verification refused the result: ${rejected}` });
       log.error({ reason: rejected }, 'certificate rejected');
