@@ -1,4 +1,4 @@
 import { defineConfig } from 'vitest/config';
-import { sourceConditions } from '../vitest.shared.ts';
+import { patientTimeouts, sourceConditions } from '../vitest.shared.ts';
 
-export default defineConfig({ ...sourceConditions, test: { include: ['test/**/*.test.ts'] } });
+export default defineConfig({ ...sourceConditions, test: { include: ['test/**/*.test.ts'], ...patientTimeouts } });

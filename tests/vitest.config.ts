@@ -1,5 +1,5 @@
 import { defineConfig } from 'vitest/config';
-import { sourceConditions } from '../vitest.shared.ts';
+import { patientTimeouts, sourceConditions } from '../vitest.shared.ts';
 
 // One file at a time: the files share the test database and start real servers.
 export default defineConfig({
@@ -8,7 +8,6 @@ export default defineConfig({
     include: ['integration/**/*.test.ts', 'e2e/**/*.test.ts', 'reliability/**/*.test.ts', 'security/**/*.test.ts'],
     globalSetup: ['support/global-setup.ts'],
     fileParallelism: false,
-    testTimeout: 60_000,
-    hookTimeout: 60_000,
+    ...patientTimeouts,
   },
 });
