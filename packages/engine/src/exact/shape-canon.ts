@@ -33,6 +33,8 @@ export class ShapeCanon {
   /** Scratch candidates of canonical(): the one being built and the least so far. */
   private candidate = new Uint32Array(0);
   private least = new Uint32Array(0);
+  /** Scratch of prefixCounts: valid until its next call. */
+  private prefix = new Int32Array(0);
   /** What the last canonicalKey found: [symmetry, r0, c0, h, w]. */
   readonly lastFrame = new Int32Array(5);
 
@@ -133,17 +135,31 @@ export class ShapeCanon {
    * columns < c of the box (a 2-D prefix sum), so any window's count costs four reads.
    */
   private prefixCounts(set: Bitset): { r0: number; c0: number; H: number; W: number; stride: number; prefix: Int32Array } {
-    const { r0, r1, c0, c1 } = this.boundingBox(set);
-    const H = r1 - r0 + 1;
-    const W = c1 - c0 + 1;
+    // From the member list scan() leaves (no per-cell membership test), into a scratch array: the search
+    // asks for this on every shape it meets and again at every budget it tries.
+    const count = this.scan(set);
+    const box = this.box;
+    const r0 = box[0]!;
+    const c0 = box[2]!;
+    const H = box[1]! - r0 + 1;
+    const W = box[3]! - c0 + 1;
     const stride = W + 1;
-    const prefix = new Int32Array((H + 1) * stride);
-    for (let r = 0; r < H; r++) {
+    const size = (H + 1) * stride;
+    if (this.prefix.length < size) this.prefix = new Int32Array(size);
+    const prefix = this.prefix;
+    prefix.fill(0, 0, size);
+    const members = this.members;
+    for (let j = 0; j < count; j++) {
+      const v = members[j]!;
+      prefix[(this.row[v]! - r0 + 1) * stride + this.col[v]! - c0 + 1] = 1;
+    }
+    // In place: each cell holds its mark until its row's running count replaces it.
+    for (let r = 1; r <= H; r++) {
       let run = 0;
-      for (let c = 0; c < W; c++) {
-        const v = this.vertexAt[(r + r0) * this.cols + c + c0]!;
-        if (v >= 0 && set.has(v)) run++;
-        prefix[(r + 1) * stride + c + 1] = prefix[r * stride + c + 1]! + run;
+      for (let c = 1; c <= W; c++) {
+        const at = r * stride + c;
+        run += prefix[at]!;
+        prefix[at] = prefix[at - stride]! + run;
       }
     }
     return { r0, c0, H, W, stride, prefix };
@@ -164,10 +180,14 @@ export class ShapeCanon {
         if (full <= best) continue;
         // The fewest missing cells over the h x w windows of the box.
         let most = 0;
-        for (let r = 0; r + h <= H; r++) {
+        const area = h * w;
+        windows: for (let r = 0; r + h <= H; r++) {
           for (let c = 0; c + w <= W; c++) {
             const inside = prefix[(r + h) * stride + c + w]! - prefix[r * stride + c + w]! - prefix[(r + h) * stride + c]! + prefix[r * stride + c]!;
-            if (inside > most) most = inside;
+            if (inside > most) {
+              most = inside;
+              if (most === area) break windows; // a full window: none can do better
+            }
           }
         }
         const bound = full - (h * w - most);
