@@ -39,7 +39,7 @@ describe('re-verification on the server', () => {
     const pool = new EnginePool({ size: 1 });
     try {
       expect(await rejectCertificate(pool, input, s)).toBeUndefined();
-      expect(await rejectCertificate(pool, input, { ...s, labels: s.labels.slice(1) })).toMatch(/^the certificate is not one label per vertex: expected 8 labels.*got 7$/);
+      expect(await rejectCertificate(pool, input, { ...s, labels: s.labels.slice(1) })).toBe('the certificate is not one label per vertex: expected 8 labels, one per vertex, got 7');
       expect(await rejectCertificate(pool, input, { ...s, labels: s.labels.map(() => 1) })).toMatch(/^the certificate is not a ranking: vertices \d and \d both have label 1/);
       expect(await rejectCertificate(pool, input, { ...s, upper: s.upper + 1 })).toBe(`the certificate uses ${s.upper} labels but claims an upper bound of ${s.upper + 1}`);
       expect(await rejectCertificate(pool, input, { ...s, rankNumber: s.upper + 1 })).toMatch(/^the rank number/);

@@ -15,8 +15,7 @@ export type EngineTask =
     }
   | { kind: 'verify'; spec: GraphSpec | string; files?: Record<string, string>; labels: number[] };
 
-/** A verify task's answer carries the graph's vertex count beside the verdict (callers report against it). */
-export type EngineTaskResult = { kind: 'solve'; solution: Solution } | { kind: 'verify'; verdict: RankingVerdict; vertexCount: number };
+export type EngineTaskResult = { kind: 'solve'; solution: Solution } | { kind: 'verify'; verdict: RankingVerdict };
 
 /** What a worker answers: a result, or an engine error in a form that survives the thread boundary. */
 export type WorkerReply = EngineTaskResult | { kind: 'error'; error: import('./engine-error-transfer').TransferredEngineError };

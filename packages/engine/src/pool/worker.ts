@@ -26,7 +26,7 @@ function runEngineTask({ task, port, stop, searchMemoryMb }: WorkerMessage): Eng
     return content;
   });
   try {
-    if (task.kind === 'verify') return { kind: 'verify', verdict: verifyRanking(graph, task.labels), vertexCount: graph.vertexCount };
+    if (task.kind === 'verify') return { kind: 'verify', verdict: verifyRanking(graph, task.labels) };
     const solution = solve(graph, {
       ...(task.method ? { method: task.method } : {}),
       ...(task.timeLimitMs !== undefined ? { timeLimitMs: task.timeLimitMs } : {}),
