@@ -1,6 +1,7 @@
 import { createHash } from 'node:crypto';
 import type pg from 'pg';
 import type { DataSource, EntityManager } from 'typeorm';
+import { pgPoolOf } from './pg-pool';
 
 /** Statement names by SQL text: a name is the text's hash, so one text always gets the same name. */
 const names = new Map<string, string>();
@@ -13,8 +14,6 @@ function statementName(text: string): string {
   }
   return name;
 }
-
-const poolOf = (source: DataSource) => (source.driver as unknown as { master: pg.Pool }).master;
 
 /**
  * The rows of a fixed SQL text run as a named prepared statement: PostgreSQL parses and plans it once
@@ -32,5 +31,5 @@ export async function preparedRows<T>(db: DataSource | EntityManager, text: stri
     return (await client.query(query)).rows as T[];
   }
   const source = 'driver' in db ? db : db.connection;
-  return (await poolOf(source).query(query)).rows as T[];
+  return (await pgPoolOf(source).query(query)).rows as T[];
 }

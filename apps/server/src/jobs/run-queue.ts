@@ -1,6 +1,6 @@
 import PgBoss from 'pg-boss';
-import type pg from 'pg';
 import type { DataSource, EntityManager } from 'typeorm';
+import { pgPoolOf } from '../db/pg-pool';
 import { loadQueueSettings, type QueueSettings } from './queue-settings';
 
 /** The pg-boss queue of runs; a job's data names its run, and the run row says what to compute. */
@@ -18,7 +18,7 @@ const senders = new WeakMap<DataSource, Promise<PgBoss>>();
 
 /** The pg-boss database interface over TypeORM's own connection pool (no second pool for sending). */
 function poolExecutor(source: DataSource): PgBoss.Db {
-  const pool = (source.driver as unknown as { master: pg.Pool }).master;
+  const pool = pgPoolOf(source);
   return { executeSql: (text, values) => pool.query(text, values) };
 }
 
