@@ -31,8 +31,7 @@ type StopReason = 'cancel' | 'closing' | 'lost';
  * The server's own check of a worker's answer, on the graph built from the run's spec: the labels are a
  * ranking of that graph (verifyRanking), use exactly `upper` labels, one per vertex, and the interval is
  * consistent. A reason when it fails, else undefined. The graph is built and checked on the engine's
- * worker pool (a 10^6-vertex certificate takes a few hundred ms, which the event loop must not spend);
- * the pool has a thread free, since the search that produced the answer has just given its thread back.
+ * worker pool (a 10^6-vertex certificate takes a few hundred ms, which the event loop must not spend).
  */
 export async function rejectCertificate(pool: EnginePool, input: EngineInput, s: Solution): Promise<string | undefined> {
   let answer;
@@ -56,7 +55,7 @@ export async function rejectCertificate(pool: EnginePool, input: EngineInput, s:
 
 /**
  * One job of the run queue: claim the run, search on the engine's worker pool with a heartbeat that
- * carries progress out and the cancel request in, re-verify the answer here, store it with the atlas
+ * carries progress out and the cancel request in, re-verify the answer (still under the heartbeat), store it with the atlas
  * in one transaction (only if this attempt still owns the run), then mail the owner if the run was long.
  */
 export async function executeRunJob(deps: ExecutorDeps, runId: string): Promise<void> {
@@ -105,7 +104,7 @@ export async function executeRunJob(deps: ExecutorDeps, runId: string): Promise<
     stored = outcome.stop === 'cancel' ? await storeCancelled(source, run) : await storeFailure(source, run, outcome.error);
     log.warn({ error: outcome.error, cancelled: outcome.stop === 'cancel' }, 'run ended without a result');
   } else {
-    const rejected = await rejectCertificate(deps.pool, input, outcome.solution);
+    const { rejected } = outcome;
     if (rejected) {
       stored = await storeFailure(source, run, { code: 'certificate_rejected', message: `the server's re-verification refused the result: ${rejected}` });
       log.error({ reason: rejected }, 'certificate rejected');
@@ -126,7 +125,10 @@ async function handBack(deps: ExecutorDeps, runId: string, afterSeconds: number)
   await deps.source.transaction((m) => enqueueRun(m, runId, row.time_limit_seconds, { startAfterSeconds: afterSeconds, settings: deps.settings }));
 }
 
-type SearchOutcome = { stop: StopReason | undefined; solution: Solution } | { stop: StopReason | undefined; error: { code: string; message: string } };
+/** What an attempt's search gave: an answer with the server's verdict on it (see rejectCertificate), or an error. */
+type SearchOutcome =
+  | { stop: StopReason | undefined; solution: Solution; rejected: string | undefined }
+  | { stop: StopReason | undefined; error: { code: string; message: string } };
 
 /** Runs the solve task with the heartbeat loop; stops it on a cancel request, on closing, or when the run is lost. */
 async function search(deps: ExecutorDeps, run: ClaimedRun, input: EngineInput): Promise<SearchOutcome> {
@@ -171,7 +173,10 @@ async function search(deps: ExecutorDeps, run: ClaimedRun, input: EngineInput): 
       { signal: controller.signal, onProgress: (p) => (pending = p) },
     );
     if (answer.kind !== 'solve') return { stop, error: { code: 'worker_failed', message: 'the engine answered a solve task with something else' } };
-    return { stop, solution: answer.solution };
+    // Verified while the heartbeat still runs, so a long check (or one waiting for a thread) never makes
+    // the attempt look dead; an attempt that lost its run or is closing stores nothing, so skips it.
+    const keeps = stop === undefined || stop === 'cancel';
+    return { stop, solution: answer.solution, rejected: keeps ? await rejectCertificate(pool, input, answer.solution) : undefined };
   } catch (err) {
     const error = err instanceof EngineError ? { code: err.code, message: err.message } : { code: 'internal', message: err instanceof Error ? err.message : String(err) };
     return { stop, error };
