@@ -62,6 +62,7 @@ export { rankingFromOrder } from './bounds/elimination-ranking';
 export { nestedDissectionRanking } from './bounds/nested-dissection';
 export { greedyEliminationRanking } from './bounds/greedy-elimination';
 export { bestUpperBound } from './bounds/best-upper-bound';
+export { boxRestrictionRanking } from './bounds/box-restriction';
 export type { BestUpperBound } from './bounds/best-upper-bound';
 export { exactTreeDepth } from './exact/exact-tree-depth';
 export type { ExactOptions, ExactProgress, ExactResult } from './exact/exact-tree-depth';

@@ -4,6 +4,7 @@ import {
   bestUpperBound,
   completeGraph,
   cycleGraph,
+  cylinderGraph,
   formulaFor,
   greedyEliminationRanking,
   gridGraph,
@@ -129,6 +130,31 @@ describe('upper-bound constructions', () => {
     }
     expect(alone).toBeGreaterThan(0);
     expect(bestUpperBound(gridGraph(4, 4)).best.value).toBe(bruteForceTreeDepth(gridGraph(4, 4)));
+  });
+
+  it('rank masks and staircases by their bounding grid kept on the cells present, never above that grid (monotone under subgraphs)', () => {
+    const shapes: [string, Graph, Graph][] = [];
+    for (let seed = 1; seed <= 40; seed++) {
+      const rows = 3 + (seed % 9);
+      const cols = 4 + (seed % 11);
+      shapes.push([`mask ${seed}`, randomMask(rows, cols, 0.7 + 0.25 * ((seed % 4) / 3), seed), gridGraph(rows, cols)]);
+    }
+    const corner = new Uint8Array(64).fill(1);
+    corner[0] = 0;
+    shapes.push(['8 x 8 without a corner', maskGraph({ rows: 8, cols: 8, present: corner }), gridGraph(8, 8)]);
+    shapes.push(['4 x 21 mask, full', maskGraph({ rows: 4, cols: 21, present: new Uint8Array(84).fill(1) }), gridGraph(4, 21)]);
+    shapes.push(['staircase 12', staircaseGraph(12), gridGraph(12, 12)]);
+    for (const [what, g, box] of shapes) {
+      const { best, all } = bestUpperBound(g);
+      const restricted = all.find((b) => b.construction === 'box-restriction');
+      expect(restricted, what).toBeDefined();
+      expectProves(g, restricted!, what);
+      expect(best.value, what).toBeLessThanOrEqual(bestUpperBound(box).best.value);
+    }
+    // A full mask is its grid: the restriction is the grid's best ranking itself.
+    expect(bestUpperBound(maskGraph({ rows: 4, cols: 21, present: new Uint8Array(84).fill(1) })).best.value).toBe(bestUpperBound(gridGraph(4, 21)).best.value);
+    // Grids have their own constructions; a torus or a cylinder has more edges than its box, so no restriction.
+    for (const g of [gridGraph(6, 7), torusGraph(6, 7), cylinderGraph(5, 8)]) expect(bestUpperBound(g).all.map((b) => b.construction)).not.toContain('box-restriction');
   });
 
   it('handle a 10^5-cell mesh with holes', () => {
