@@ -1,6 +1,7 @@
 import { bestUpperBound } from '../bounds/best-upper-bound';
 import { Bitset } from '../graph/bitset';
 import type { Graph } from '../graph/graph';
+import { containedRectangles } from './contained-rectangles';
 import { SearchStopped, type StopReason } from './search-stop';
 import { TreeDepthSearch } from './tree-depth-search';
 
@@ -74,19 +75,13 @@ export function exactTreeDepth(g: Graph, options: ExactOptions = {}): ExactResul
     if (options.signal?.aborted) throw new SearchStopped('aborted');
     lower = Math.max(lower, Math.min(upper, search.provenLower(all)));
     report();
-    const f = g.family;
-    if (f?.kind === 'grid' && f.rows > 2 && f.cols > 2) {
+    const kind = g.family?.kind;
+    if (kind === 'grid' || kind === 'mask' || kind === 'staircase') {
       // Solve the sub-rectangles first, smallest first: their exact values become lower bounds of every
       // shape that contains them (issue plan: tabulate the rectangles inside the target).
-      const sizes: [number, number][] = [];
-      for (let h = 3; h <= Math.min(f.rows, f.cols); h++) for (let w = h; w <= Math.max(f.rows, f.cols); w++) if (h * w < n) sizes.push([h, w]);
-      sizes.sort((p, q) => p[0] * p[1] - q[0] * q[1]);
-      for (const [h, w] of sizes) {
-        const [rh, rw] = h <= f.rows && w <= f.cols ? [h, w] : [w, h];
-        const rect = new Bitset(n);
-        for (let r = 0; r < rh; r++) for (let c = 0; c < rw; c++) rect.add(r * f.cols + c);
-        // td never grows on subgraphs, so each sub-rectangle's value bounds the whole grid below.
-        lower = Math.max(lower, Math.min(upper, search.treeDepth(rect)));
+      for (const rect of containedRectangles(g)) {
+        // td never grows on subgraphs, so each sub-rectangle's value bounds the whole shape below.
+        lower = Math.max(lower, Math.min(upper, search.treeDepth(rect.cells())));
         report();
       }
     }
