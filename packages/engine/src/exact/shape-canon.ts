@@ -174,8 +174,10 @@ export class ShapeCanon {
   rectangleBound(set: Bitset, value: (h: number, w: number) => number): number {
     const { r0, c0, H, W, stride, prefix } = this.prefixCounts(set);
     let best = 0;
-    for (let h = 1; h <= H; h++) {
-      for (let w = 1; w <= W; w++) {
+    // Largest rectangles first: they usually give the best bound, and then most smaller ones cannot beat
+    // it and need no window scan.
+    for (let h = H; h >= 1; h--) {
+      for (let w = W; w >= 1; w--) {
         const full = value(h, w);
         if (full <= best) continue;
         // The fewest missing cells over the h x w windows of the box.

@@ -55,8 +55,13 @@ export class TreeDepthSearch {
   private readonly byDegree: Uint32Array;
   /** For grid shapes: memo keys up to translation and the 8 symmetries of the square. */
   private readonly canon: ShapeCanon | undefined;
-  /** Proven tree-depths of full h x w rectangles (key h * 65536 + w, h <= w), for lower bounds of shapes. */
-  private readonly rectangles = new Map<number, number>();
+  /**
+   * For grid shapes: a proven lower bound of every full h x w rectangle that fits in the layout, at
+   * h * rectangleSide + w (both orientations), exact once the search has solved it: the rectangle bound
+   * and the top window read it for every size of every box they scan.
+   */
+  private readonly rectangleSide: number;
+  private readonly rectangleTable: Int32Array;
 
   constructor(
     g: Graph,
@@ -69,6 +74,17 @@ export class TreeDepthSearch {
     this.grown = new Bitset(this.n);
     this.cuts = new CutVertices(g.offsets, g.targets);
     this.canon = ShapeCanon.applies(g) ? new ShapeCanon(g) : undefined;
+    // Before any is solved: the closed forms for sides 1 and 2 (Bodlaender et al. 1998; Alpert 2010) and
+    // the treewidth bound min(h, w) + 1 (td >= tw + 1).
+    this.rectangleSide = this.canon ? Math.max(g.layout!.rows, g.layout!.cols) + 1 : 0;
+    this.rectangleTable = new Int32Array(this.rectangleSide * this.rectangleSide);
+    for (let a = 1; a < this.rectangleSide; a++) {
+      for (let b = 1; b < this.rectangleSide; b++) {
+        const h = Math.min(a, b);
+        const w = Math.max(a, b);
+        this.rectangleTable[a * this.rectangleSide + b] = h === 1 ? floorLog2(w) + 1 : h === 2 ? grid2RankNumber(w) : h + 1;
+      }
+    }
     this.minorMinWidth = this.canon ? undefined : new SetMinorMinWidth(this.n, this.adj);
     this.byDegree = Uint32Array.from({ length: this.n }, (_, v) => v).sort((a, b) => g.degree(b) - g.degree(a) || a - b);
   }
@@ -124,6 +140,9 @@ export class TreeDepthSearch {
    */
   private cheapLowerBound(c: Bitset, size: number): number {
     const byWidth = this.canon ? Math.min(size, 2) : this.minorMinWidth!.bound(c);
+    const known = Math.max(byWidth, this.rectangleBound(c));
+    // No path in C is longer than C, so the path bound cannot beat ⌊log2 |C|⌋ + 1: skip its search then.
+    if (known >= floorLog2(size) + 1) return known;
     // A breadth-first search from the first vertex reaches a vertex at distance ecc: a path of ecc + 1
     // vertices, so td >= ⌊log2(ecc + 1)⌋ + 1 (Bodlaender et al., SIAM J. Discrete Math. 1998).
     let ecc = 0;
@@ -139,7 +158,7 @@ export class TreeDepthSearch {
       frontier.copyFrom(next);
       ecc++;
     }
-    return Math.max(byWidth, 32 - Math.clz32(ecc + 1), this.rectangleBound(c));
+    return Math.max(known, 32 - Math.clz32(ecc + 1));
   }
 
   /**
@@ -153,12 +172,7 @@ export class TreeDepthSearch {
   }
 
   /** A proven lower bound of the full h x w rectangle (exact when the search has solved it). */
-  private readonly rectangleValue = (h0: number, w0: number): number => {
-    const h = Math.min(h0, w0);
-    const w = Math.max(h0, w0);
-    const known = this.rectangles.get(h * 65536 + w);
-    return known ?? (h === 1 ? floorLog2(w) + 1 : h === 2 ? grid2RankNumber(w) : h + 1);
-  };
+  private readonly rectangleValue = (h: number, w: number): number => this.rectangleTable[h * this.rectangleSide + w]!;
 
   /** Remembers an exact value when the set is a full rectangle, for later lower bounds. */
   private noteIfRectangle(e: number, c: Bitset): void {
@@ -166,7 +180,9 @@ export class TreeDepthSearch {
     const dims = this.memo.table.word(e, 0); // canonical key: height << 16 | width
     const h = dims >>> 16;
     const w = dims & 0xffff;
-    if (c.popcount() === h * w) this.rectangles.set(Math.min(h, w) * 65536 + Math.max(h, w), this.memo.upper(e));
+    if (c.popcount() !== h * w) return;
+    const side = this.rectangleSide;
+    this.rectangleTable[h * side + w] = this.rectangleTable[w * side + h] = this.memo.upper(e);
   }
 
   private tick(): void {
