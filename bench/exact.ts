@@ -1,10 +1,13 @@
-import { mkdirSync, writeFileSync } from 'node:fs';
+import { existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
 import { machineDescription } from './machine';
 import { exactTreeDepth, gridGraph, maskGraph, randomGraph, staircaseGraph, type Graph } from '@cairn/engine';
 
 // The exact search's benchmark cases (timed runs, not benchmark.js: one run can take seconds). Each run
 // has a time limit (CAIRN_EXACT_LIMIT_S, default 10 s), so the figures say how far it got, not only how fast.
 const limitMs = 1000 * Number(process.env.CAIRN_EXACT_LIMIT_S ?? 10);
+// CAIRN_EXACT_ONLY="grid 8x8;staircase S(10)" runs only those cases (names end to end, split at ";", as
+// some names hold commas) and keeps the other recorded rows.
+const only = process.env.CAIRN_EXACT_ONLY?.split(';').map((s) => s.trim()).filter(Boolean);
 
 function cornerless(rows: number, cols: number): Graph {
   const present = new Uint8Array(rows * cols).fill(1);
@@ -26,7 +29,13 @@ const cases: [string, Graph, number | null][] = [
   ['G(50, 3/50) seed 1', randomGraph(50, 3 / 50, 1), null],
 ];
 
-const rows = cases.map(([name, g, targetMs]) => {
+const chosen = only ? cases.filter(([name]) => only.includes(name)) : cases;
+if (only && chosen.length !== only.length) {
+  const unknown = only.filter((o) => !cases.some(([name]) => name === o));
+  process.stderr.write(`CAIRN_EXACT_ONLY names no case called ${unknown.map((u) => `"${u}"`).join(', ')}; the cases are: ${cases.map(([name]) => `"${name}"`).join('; ')}\n`);
+  process.exit(2);
+}
+const rows = chosen.map(([name, g, targetMs]) => {
   global.gc?.();
   const before = process.memoryUsage().rss;
   let peak = before;
@@ -51,13 +60,26 @@ const rows = cases.map(([name, g, targetMs]) => {
   return row;
 });
 
+const dir = new URL('./results/', import.meta.url);
+const file = new URL('exact.json', dir);
+type Row = (typeof rows)[number] & { recordedAt?: string; timeLimitMs?: number };
+const previous: { recordedAt?: string; timeLimitMs?: number; cases?: Row[] } = only && existsSync(file) ? JSON.parse(readFileSync(file, 'utf8')) : {};
+const now = new Date().toISOString();
+// A partial run dates its own rows; the rows kept carry the date and limit they were recorded with.
+const kept = (row: Row): Row => ({ ...row, recordedAt: row.recordedAt ?? previous.recordedAt, timeLimitMs: row.timeLimitMs ?? previous.timeLimitMs });
 const out = {
-  recordedAt: new Date().toISOString(),
+  recordedAt: now,
   machine: machineDescription(),
   timeLimitMs: limitMs,
-  cases: rows,
+  cases: only
+    ? cases.map(([name]) => {
+        const fresh = rows.find((r) => r.name === name);
+        if (fresh) return { ...fresh, recordedAt: now, timeLimitMs: limitMs };
+        const old = previous.cases?.find((r) => r.name === name);
+        return old ? kept(old) : undefined;
+      }).filter((r) => r !== undefined)
+    : rows,
 };
-const dir = new URL('./results/', import.meta.url);
 mkdirSync(dir, { recursive: true });
-writeFileSync(new URL('exact.json', dir), `${JSON.stringify(out, null, 2)}\n`);
+writeFileSync(file, `${JSON.stringify(out, null, 2)}\n`);
 process.stdout.write('figures written to bench/results/exact.json\n');
