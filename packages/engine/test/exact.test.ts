@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import {
+  Bitset,
   completeBipartiteGraph,
   completeGraph,
   cycleGraph,
@@ -13,6 +14,7 @@ import {
   verifyRanking,
   type Graph,
 } from '../src/index';
+import { TreeDepthSearch } from '../src/exact/tree-depth-search';
 import { bruteForceTreeDepth } from './brute-force-td';
 
 function expectExact(g: Graph, expected: number, what: string) {
@@ -98,5 +100,29 @@ describe('exactTreeDepth', () => {
       expect(seen[i]![1]).toBeLessThanOrEqual(seen[i - 1]![1]);
     }
     expect(seen.at(-1)).toEqual([r.lower, r.upper]);
+  });
+});
+
+describe('the lower bounds proven on the way', () => {
+  it('rise one by one to the value (4 x 6 and a 4 x 6 mask missing a corner, against the brute force)', () => {
+    const present = new Uint8Array(24).fill(1);
+    present[0] = 0;
+    for (const g of [gridGraph(4, 6), maskGraph({ rows: 4, cols: 6, present })]) {
+      const search = new TreeDepthSearch(g);
+      const heard: number[] = [];
+      const value = search.treeDepth(Bitset.full(g.vertexCount), (lower) => heard.push(lower));
+      expect(value).toBe(bruteForceTreeDepth(g));
+      expect(heard.at(-1)).toBe(value);
+      for (let i = 1; i < heard.length; i++) expect(heard[i]).toBeGreaterThanOrEqual(heard[i - 1]!);
+      expect(heard.every((l) => l <= value)).toBe(true);
+    }
+  });
+
+  it('of each sub-rectangle reach the whole shape as they come: its progress never passes the value and ends there', () => {
+    const lowers: number[] = [];
+    const r = exactTreeDepth(gridGraph(5, 7), { onProgress: (p) => lowers.push(p.lower) });
+    expect(r.status).toBe('exact');
+    for (let i = 1; i < lowers.length; i++) expect(lowers[i]).toBeGreaterThanOrEqual(lowers[i - 1]!);
+    expect(lowers.at(-1)).toBe(r.upper);
   });
 });

@@ -79,9 +79,15 @@ export function exactTreeDepth(g: Graph, options: ExactOptions = {}): ExactResul
     if (kind === 'grid' || kind === 'mask' || kind === 'staircase') {
       // Solve the sub-rectangles first, smallest first: their exact values become lower bounds of every
       // shape that contains them (issue plan: tabulate the rectangles inside the target).
+      // td never grows on subgraphs, so each sub-rectangle's value bounds the whole shape below, and so
+      // does every lower bound proven on the way to it (kept when a limit stops the search there).
+      const raise = (proven: number) => {
+        if (Math.min(upper, proven) <= lower) return;
+        lower = Math.min(upper, proven);
+        report();
+      };
       for (const rect of containedRectangles(g)) {
-        // td never grows on subgraphs, so each sub-rectangle's value bounds the whole shape below.
-        lower = Math.max(lower, Math.min(upper, search.treeDepth(rect.cells())));
+        raise(search.treeDepth(rect.cells(), raise));
         report();
       }
     }

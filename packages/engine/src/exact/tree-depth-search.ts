@@ -174,15 +174,20 @@ export class TreeDepthSearch {
   /** A proven lower bound of the full h x w rectangle (exact when the search has solved it). */
   private readonly rectangleValue = (h: number, w: number): number => this.rectangleTable[h * this.rectangleSide + w]!;
 
-  /** Remembers an exact value when the set is a full rectangle, for later lower bounds. */
+  /**
+   * When the set is a full rectangle, remembers its proven lower bound (exact once solved) for the
+   * rectangle bound of every shape that contains one like it: a refutation of "td <= k" on a rectangle
+   * counts at once, before its value is known.
+   */
   private noteIfRectangle(e: number, c: Bitset): void {
-    if (!this.canon || this.memo.lower(e) !== this.memo.upper(e)) return;
+    if (!this.canon) return;
     const dims = this.memo.table.word(e, 0); // canonical key: height << 16 | width
     const h = dims >>> 16;
     const w = dims & 0xffff;
     if (c.popcount() !== h * w) return;
     const side = this.rectangleSide;
-    this.rectangleTable[h * side + w] = this.rectangleTable[w * side + h] = this.memo.upper(e);
+    const proven = this.memo.lower(e);
+    if (proven > this.rectangleTable[h * side + w]!) this.rectangleTable[h * side + w] = this.rectangleTable[w * side + h] = proven;
   }
 
   private tick(): void {
@@ -318,10 +323,16 @@ export class TreeDepthSearch {
     return true;
   }
 
-  /** The exact tree-depth of a connected set, by deepening k from its lower bound. */
-  treeDepth(c: Bitset): number {
+  /**
+   * The exact tree-depth of a connected set, by deepening k from its lower bound; `onLower` hears each
+   * lower bound proven on the way (a caller stopped by a limit keeps the last one).
+   */
+  treeDepth(c: Bitset, onLower?: (lower: number) => void): number {
     const e = this.entryOf(c);
-    while (this.memo.lower(e) < this.memo.upper(e)) this.connectedAtMost(c, this.memo.lower(e));
+    while (this.memo.lower(e) < this.memo.upper(e)) {
+      this.connectedAtMost(c, this.memo.lower(e));
+      onLower?.(this.memo.lower(e));
+    }
     return this.memo.upper(e);
   }
 
