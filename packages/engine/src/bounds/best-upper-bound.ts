@@ -9,7 +9,7 @@ import { MidlineSplit } from './midline-split';
 import { nestedDissectionRanking } from './nested-dissection';
 import { StaircaseRanking } from './staircase-ranking';
 import { optimalTreeRanking } from './tree-ranking';
-import type { UpperBound } from './upper-bound';
+import { boundOfRanking, type UpperBound } from './upper-bound';
 
 export interface BestUpperBound {
   best: UpperBound;
@@ -33,8 +33,7 @@ export function bestUpperBound(g: Graph): BestUpperBound {
     return { best: empty, all: [empty] };
   }
   if (isForest(g)) {
-    const labels = optimalTreeRanking(g);
-    all.push({ value: maxOf(labels), labels, construction: 'tree-optimal', argument: 'optimal ranking of a forest (Schäffer, Inform. Process. Lett. 1989)' });
+    all.push(boundOfRanking(optimalTreeRanking(g), 'tree-optimal', () => 'optimal ranking of a forest (Schäffer, Inform. Process. Lett. 1989)'));
   }
   const f = g.family;
   if (f?.kind === 'grid') all.push(...gridConstructions(f.rows, f.cols));
@@ -62,8 +61,3 @@ function lowest(bounds: UpperBound[]): UpperBound {
   return bounds.reduce((best, b) => (b.value < best.value ? b : best));
 }
 
-function maxOf(labels: Int32Array): number {
-  let m = 0;
-  for (const l of labels) if (l > m) m = l;
-  return m;
-}

@@ -1,6 +1,6 @@
 import type { Graph } from '../graph/graph';
 import { normalizeLabels } from '../ranking/normalize';
-import type { UpperBound } from './upper-bound';
+import { boundOfRanking, type UpperBound } from './upper-bound';
 
 /**
  * For a mask or a staircase: the best ranking of its whole bounding grid (`rankGrid`: the full-grid
@@ -17,13 +17,10 @@ export function boxRestrictionRanking(g: Graph, rankGrid: (rows: number, cols: n
   const whole = rankGrid(rows, cols); // row-major, as the layout's cells: cell r * cols + c
   const kept = new Int32Array(g.vertexCount);
   for (let v = 0; v < kept.length; v++) kept[v] = whole.labels[cells[v]!]!;
-  const labels = normalizeLabels(g, kept);
-  let value = 0;
-  for (const l of labels) if (l > value) value = l;
-  return {
-    value,
-    labels,
-    construction: 'box-restriction',
-    argument: `the ${whole.construction} ranking of the whole ${rows} x ${cols} grid (${whole.value} labels) kept on the ${g.vertexCount} cells present and renumbered in order: a ranking stays a ranking on an induced subgraph`,
-  };
+  return boundOfRanking(
+    normalizeLabels(g, kept),
+    'box-restriction',
+    (value) =>
+      `the ${whole.construction} ranking of the whole ${rows} x ${cols} grid (${whole.value} labels) kept on the ${g.vertexCount} cells present and renumbered in order (${value} labels): a ranking stays a ranking on an induced subgraph`,
+  );
 }

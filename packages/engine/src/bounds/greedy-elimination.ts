@@ -1,6 +1,6 @@
 import type { Graph } from '../graph/graph';
 import { rankingFromOrder } from './elimination-ranking';
-import type { UpperBound } from './upper-bound';
+import { boundOfRanking, type UpperBound } from './upper-bound';
 
 /**
  * Greedy elimination: eliminate vertices of small degree first (a minimum-degree ordering on the original
@@ -16,13 +16,9 @@ export function greedyEliminationRanking(g: Graph): UpperBound {
   for (let d = 1; d <= maxDegree + 1; d++) start[d]! += start[d - 1]!;
   const order = new Uint32Array(n);
   for (let v = 0; v < n; v++) order[start[g.degree(v)]!++] = v;
-  const labels = rankingFromOrder(g, order);
-  let value = 0;
-  for (const l of labels) if (l > value) value = l;
-  return {
-    value,
-    labels,
-    construction: 'greedy-elimination',
-    argument: `eliminate vertices of smallest degree first and label by height in the elimination forest (${value} labels)`,
-  };
+  return boundOfRanking(
+    rankingFromOrder(g, order),
+    'greedy-elimination',
+    (value) => `eliminate vertices of smallest degree first and label by height in the elimination forest (${value} labels)`,
+  );
 }

@@ -8,3 +8,10 @@ export interface UpperBound {
   /** The argument in words. */
   argument: string;
 }
+
+/** The bound a ranking proves: its largest label, with the construction's name and its argument in words. */
+export function boundOfRanking(labels: Int32Array, construction: string, argument: (value: number) => string): UpperBound {
+  let value = 0;
+  for (const l of labels) if (l > value) value = l;
+  return { value, labels, construction, argument: argument(value) };
+}
