@@ -60,4 +60,3 @@ function gridConstructions(rows: number, cols: number): UpperBound[] {
 function lowest(bounds: UpperBound[]): UpperBound {
   return bounds.reduce((best, b) => (b.value < best.value ? b : best));
 }
-
