@@ -27,39 +27,45 @@ export function verifyRanking(g: Graph, labels: ArrayLike<number>): RankingVerdi
   const label = labels instanceof Int32Array ? labels : Int32Array.from(labels); // one array kind: monomorphic loops
   const { offsets, targets } = g;
   // Union-find inlined (the hot loop of the whole engine): parent -1 is not yet added, roots point to
-  // themselves; path halving and union by size. stamp[root] === l marks a set that already holds a
-  // vertex labelled l. One pass in label order: v joins the sets of its neighbours added before it, and
-  // meeting a set stamped with v's own label is the violation (whichever of two such vertices comes
-  // second finds the first).
+  // themselves; path halving and union by size. stamp[root] === l marks a set that already
+  // holds a vertex labelled l: joining two such sets is the violation.
   const parent = new Int32Array(n).fill(-1);
   const stamp = new Int32Array(n);
   const size = new Uint32Array(n);
-  for (let i = 0; i < n; i++) {
-    const v = order[i]!;
-    const l = label[v]!;
-    parent[v] = v;
-    stamp[v] = l;
-    size[v] = 1;
-    let rv = v;
-    for (let e = offsets[v]!, stop = offsets[v + 1]!; e < stop; e++) {
-      let rw = targets[e]!;
-      if (parent[rw] === -1) continue;
-      while (parent[rw] !== rw) rw = parent[rw] = parent[parent[rw]!]!;
-      if (rw === rv) continue;
-      if (stamp[rw] === l) {
-        return { valid: false, labelsUsed: groupEnds.length, maxLabel: top, violation: nearestClash(g, label, l, v) };
-      }
-      // Union by size keeps the trees shallow; the joined set holds v, so it carries the stamp.
-      if (size[rw]! > size[rv]!) {
-        parent[rv] = rw;
-        size[rw]! += size[rv]!;
-        stamp[rw] = l;
-        rv = rw;
-      } else {
-        parent[rw] = rv;
-        size[rv]! += size[rw]!;
+  for (let k = 0, start = 0; k < groupEnds.length; k++) {
+    const end = groupEnds[k]!;
+    const l = label[order[start]!]!;
+    for (let i = start; i < end; i++) {
+      const v = order[i]!;
+      parent[v] = v;
+      stamp[v] = l;
+      size[v] = 1;
+    }
+    for (let i = start; i < end; i++) {
+      const v = order[i]!;
+      let rv = v;
+      while (parent[rv] !== rv) rv = parent[rv] = parent[parent[rv]!]!;
+      for (let e = offsets[v]!, stop = offsets[v + 1]!; e < stop; e++) {
+        let rw = targets[e]!;
+        if (parent[rw] === -1) continue;
+        while (parent[rw] !== rw) rw = parent[rw] = parent[parent[rw]!]!;
+        if (rw === rv) continue;
+        if (stamp[rw] === l) {
+          return { valid: false, labelsUsed: groupEnds.length, maxLabel: top, violation: nearestClash(g, label, l, v) };
+        }
+        // Union by size keeps the trees shallow; the joined set holds v, so it carries the stamp.
+        if (size[rw]! > size[rv]!) {
+          parent[rv] = rw;
+          size[rw]! += size[rv]!;
+          stamp[rw] = l;
+          rv = rw;
+        } else {
+          parent[rw] = rv;
+          size[rv]! += size[rw]!;
+        }
       }
     }
+    start = end;
   }
   return { valid: true, labelsUsed: groupEnds.length, maxLabel: top };
 }
