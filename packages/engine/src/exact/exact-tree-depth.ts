@@ -77,9 +77,8 @@ export function exactTreeDepth(g: Graph, options: ExactOptions = {}): ExactResul
     report();
     const kind = g.family?.kind;
     if (kind === 'grid' || kind === 'mask' || kind === 'staircase') {
-      // Solve the sub-rectangles first, smallest first: their exact values become lower bounds of every
-      // shape that contains them (issue plan: tabulate the rectangles inside the target).
-      // td never grows on subgraphs, so each sub-rectangle's value bounds the whole shape below, and so
+      // Solve the sub-rectangles first, smallest first (issue plan: tabulate the rectangles inside the
+      // target). td never grows on subgraphs, so each one's value bounds the whole shape below, and so
       // does every lower bound proven on the way to it (kept when a limit stops the search there).
       const raise = (proven: number) => {
         if (Math.min(upper, proven) <= lower) return;
@@ -88,7 +87,7 @@ export function exactTreeDepth(g: Graph, options: ExactOptions = {}): ExactResul
       };
       for (const rect of containedRectangles(g)) {
         raise(search.treeDepth(rect.cells(), raise));
-        report();
+        report(); // the node count moves on even when the bound does not
       }
     }
     while (lower < upper) {
