@@ -3,7 +3,6 @@ import type { ApiKeyCreatedResponse, MeResponse } from '@cairn/schema';
 import { createDataSource, createLogger, Database, loadDemoData } from '@cairn/server';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { startBuiltServer, type BuiltServer } from '../support/built-server';
-import { freePort } from '../support/free-port';
 import { databaseUrl } from '../support/test-env';
 
 // The built server (node apps/server/dist/main.js) with its own local sign-in provider, signing in the
@@ -15,8 +14,7 @@ let db: Database;
 beforeAll(async () => {
   db = new Database(createDataSource(databaseUrl()), createLogger('silent'));
   await loadDemoData(await db.connect());
-  const port = await freePort();
-  server = await startBuiltServer({ CAIRN_PORT: String(port), CAIRN_PUBLIC_URL: `http://127.0.0.1:${port}` });
+  server = await startBuiltServer({}, { publicUrlIsOwn: true });
 });
 afterAll(async () => {
   await server?.stop();

@@ -16,7 +16,6 @@ import type { ApiKeyCreatedResponse, MeResponse, RunList, RunView } from '@cairn
 import { createDataSource, createLogger, Database, loadDemoData } from '@cairn/server';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { startBuiltServer, type BuiltServer } from '../support/built-server';
-import { freePort } from '../support/free-port';
 import { databaseUrl } from '../support/test-env';
 import { sql, waitForRun } from '../integration/run-processes';
 
@@ -113,17 +112,17 @@ beforeAll(async () => {
   demoKey = (await loadDemoData(await db.connect())).apiKey;
   secrets.set('demo key', demoKey);
   secrets.set('session secret', SESSION_SECRET);
-  const port = await freePort();
-  server = await startBuiltServer({
-    CAIRN_PORT: String(port),
-    CAIRN_PUBLIC_URL: `http://127.0.0.1:${port}`,
-    CAIRN_RUN_CONCURRENCY: '1',
-    CAIRN_ENGINE_THREADS: '1',
-    CAIRN_SESSION_SECRET: SESSION_SECRET,
-    CAIRN_RATE_LIMIT_PER_MINUTE: '100000',
-    // Every request is logged, with its headers: the log check below is not vacuous.
-    CAIRN_LOG_LEVEL: 'debug',
-  });
+  server = await startBuiltServer(
+    {
+      CAIRN_RUN_CONCURRENCY: '1',
+      CAIRN_ENGINE_THREADS: '1',
+      CAIRN_SESSION_SECRET: SESSION_SECRET,
+      CAIRN_RATE_LIMIT_PER_MINUTE: '100000',
+      // Every request is logged, with its headers: the log check below is not vacuous.
+      CAIRN_LOG_LEVEL: 'debug',
+    },
+    { publicUrlIsOwn: true },
+  );
   const doc = (await (await fetch(`${server.url}/api/v1/openapi.json`)).json()) as { paths: Record<string, Record<string, { 'x-cairn-needs': string }>> };
   routes = Object.entries(doc.paths).flatMap(([path, ops]) => Object.entries(ops).map(([method, op]) => ({ method: method.toUpperCase(), path, needs: op['x-cairn-needs'] })));
   for (const login of ['ines-marlow', 'tobias-quell', 'wren-adeyemi', 'guest-reader']) sessions[login] = await signIn(login);
