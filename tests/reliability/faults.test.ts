@@ -115,11 +115,13 @@ describe('faults', () => {
     // (no limit) would otherwise race it for the job and run the search to its time limit.
     await server?.stop();
     server = undefined;
-    const heapMb = 96;
+    const heapMb = 64;
+    // A random graph: its vertex branching fills the search's tables fast (grids branch over separators).
+    const bigSpec = 'gnp:50:0.06:1';
     const oomServer = await startBuiltServer({ ...env, CAIRN_RUN_CONCURRENCY: '2', CAIRN_ENGINE_THREADS: '2', CAIRN_ENGINE_MEMORY_MB: String(heapMb) });
     try {
       const t0 = Date.now();
-      const big = await submit(oomServer.url, key, { spec: 'grid:5x40', method: 'exact', timeLimitSeconds: 60 });
+      const big = await submit(oomServer.url, key, { spec: bigSpec, method: 'exact', timeLimitSeconds: 60 });
       const quick = [];
       for (const spec of ['path:33', 'cycle:21', 'complete:6']) quick.push(await submit(oomServer.url, key, { spec }));
       const failed = await waitForRun(oomServer.url, big.id, key, undefined, 70_000);
@@ -132,7 +134,7 @@ describe('faults', () => {
       expect(stopped.rankNumber).toBeNull();
       expect(stopped.lower).toBeLessThan(stopped.upper);
       // The certificate is re-checked here by the engine's verifier, not only by the server's word.
-      const g = graphFromSpec('grid:5x40');
+      const g = graphFromSpec(bigSpec);
       expect(verifyRanking(g, stopped.labels)).toMatchObject({ valid: true, maxLabel: stopped.upper });
       // The worker thread is free again: a run submitted afterwards is computed too.
       const after = await submit(oomServer.url, key, { spec: 'path:34' });
@@ -149,7 +151,7 @@ describe('faults', () => {
       expect(row).toEqual({ status: 'done', attempts: 1 });
       recordReliability('memoryLimitRun', {
         how: `CAIRN_ENGINE_MEMORY_MB=${heapMb} on the built server`,
-        spec: 'grid:5x40 exact, time limit 60 s',
+        spec: `${bigSpec} exact, time limit 60 s`,
         stopReason: stopped.stats.stopReason,
         interval: [stopped.lower, stopped.upper],
         memoSize: stopped.stats.memoSize,

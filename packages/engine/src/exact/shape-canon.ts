@@ -233,6 +233,40 @@ export class ShapeCanon {
     return [lo + r0, hi + r0, left + c0, right + c0];
   }
 
+  /**
+   * The rectangles that confine a separator X of `set` when |X| + td(set - X) <= k is asked: by the bound
+   * of rectangleBound, td(set - X) >= value(R) - |R \ set| - |R ∩ X|, so X has at most
+   * slack = k - value(R) + |R \ set| cells outside R. Returned as [r0, r1, c0, c1, slack] quintuples in grid
+   * coordinates, only those with slack below maxSize (the others cannot bind) and none whose constraint
+   * a smaller rectangle with no more slack already implies.
+   */
+  separatorRectangles(set: Bitset, k: number, value: (h: number, w: number) => number, maxSize: number): Int32Array {
+    const { r0, c0, H, W, stride, prefix } = this.prefixCounts(set);
+    const found: number[][] = [];
+    for (let h = 1; h <= H; h++) {
+      for (let w = 1; w <= W; w++) {
+        const full = value(h, w);
+        if (k - full >= maxSize) continue; // even with no cell missing it cannot bind
+        for (let r = 0; r + h <= H; r++) {
+          for (let c = 0; c + w <= W; c++) {
+            const inside = prefix[(r + h) * stride + c + w]! - prefix[r * stride + c + w]! - prefix[(r + h) * stride + c]! + prefix[r * stride + c]!;
+            const slack = k - full + (h * w - inside);
+            if (slack < maxSize) found.push([r, r + h - 1, c, c + w - 1, slack, h * w]);
+          }
+        }
+      }
+    }
+    found.sort((a, b) => a[4]! - b[4]! || a[5]! - b[5]!);
+    const kept: number[][] = [];
+    for (const q of found) {
+      const implied = kept.some((p) => p[0]! >= q[0]! && p[1]! <= q[1]! && p[2]! >= q[2]! && p[3]! <= q[3]!);
+      if (!implied) kept.push(q);
+    }
+    const out = new Int32Array(5 * kept.length);
+    kept.forEach((q, i) => out.set([q[0]! + r0, q[1]! + r0, q[2]! + c0, q[3]! + c0, q[4]!], 5 * i));
+    return out;
+  }
+
   /** How far vertex v lies from the middle of the window (twice the Manhattan distance, so whole). */
   offCentre(v: number, win: readonly [number, number, number, number]): number {
     return Math.abs(2 * this.row[v]! - win[0] - win[1]) + Math.abs(2 * this.col[v]! - win[2] - win[3]);

@@ -5,6 +5,7 @@ import { CutVertices } from './cut-vertices';
 import { SearchStopped } from './search-stop';
 import { SearchMemo } from './search-memo';
 import { SetMinorMinWidth } from './set-minor-min-width';
+import { GridSeparators } from './grid-separators';
 import { grown, SetTable } from './set-table';
 import { ShapeCanon, type CellFrame } from './shape-canon';
 
@@ -21,6 +22,9 @@ export interface SearchLimits {
   memoryBytes?: number | undefined;
 }
 
+/** Connected grid shapes of at least this many cells branch over separators, smaller ones over vertices. */
+const SEPARATOR_BRANCHING_FROM = 3;
+
 /** One component of a vertex set, with its memo entry and (for grid shapes) its raw-set entry. */
 interface Part {
   c: Bitset;
@@ -34,8 +38,10 @@ interface Part {
  * Asked in decision form, "td(S) <= k?", every component first checked against its proven bounds, every
  * set's proven bounds memoised, and lower bounds cutting branches that cannot fit: minor-min-width + 1 and the
  * path bound from a breadth-first eccentricity, and for grid shapes the rectangle bound with missing
- * cells (value(R) - |R \ S| for each rectangle R of the bounding box). The same bound confines the top:
- * it must lie in every rectangle that already bounds S by k (see ShapeCanon.topWindow).
+ * cells (value(R) - |R \ S| for each rectangle R of the bounding box). General graphs branch over the
+ * top vertex. Grid shapes branch over minimal separators instead (see separatorAtMost), so the sets a
+ * top chain passes through on its way to a split are never memoised; the rectangle bound confines the
+ * separator (ShapeCanon.separatorRectangles) as it confines a top (ShapeCanon.topWindow).
  */
 export class TreeDepthSearch {
   readonly memo = new SearchMemo();
@@ -55,6 +61,8 @@ export class TreeDepthSearch {
   private readonly byDegree: Uint32Array;
   /** For grid shapes: memo keys up to translation and the 8 symmetries of the square. */
   private readonly canon: ShapeCanon | undefined;
+  /** For grid shapes: candidate minimal separators, the branching of shapes above SEPARATOR_BRANCHING_FROM cells. */
+  private readonly separators: GridSeparators | undefined;
   /**
    * For grid shapes: a proven lower bound of every full h x w rectangle that fits in the layout, at
    * h * rectangleSide + w (both orientations), exact once the search has solved it: the rectangle bound
@@ -74,6 +82,7 @@ export class TreeDepthSearch {
     this.grown = new Bitset(this.n);
     this.cuts = new CutVertices(g.offsets, g.targets);
     this.canon = ShapeCanon.applies(g) ? new ShapeCanon(g) : undefined;
+    this.separators = this.canon ? new GridSeparators(g) : undefined;
     // Before any is solved: the closed forms for sides 1 and 2 (Bodlaender et al. 1998; Alpert 2010) and
     // the treewidth bound min(h, w) + 1 (td >= tw + 1).
     this.rectangleSide = this.canon ? Math.max(g.layout!.rows, g.layout!.cols) + 1 : 0;
@@ -192,10 +201,14 @@ export class TreeDepthSearch {
 
   private tick(): void {
     if ((++this.nodes & 15) !== 0) return;
+    this.checkLimits();
+  }
+
+  private readonly checkLimits = (): void => {
     if (this.limits.signal?.aborted || (this.limits.stopFlag && Atomics.load(this.limits.stopFlag, 0) !== 0)) throw new SearchStopped('aborted');
     if (this.limits.deadline !== undefined && Date.now() > this.limits.deadline) throw new SearchStopped('time-limit');
     if (this.limits.memoryBytes !== undefined && (this.nodes & 1023) === 0 && 2 * this.bytes > this.limits.memoryBytes) throw new SearchStopped('memory-limit');
-  }
+  };
 
   /** Bytes held by the search's tables (the memo and the raw-set table). */
   get bytes(): number {
@@ -291,6 +304,7 @@ export class TreeDepthSearch {
       this.noteIfRectangle(e, c);
       return false;
     }
+    if (this.separators && c.popcount() >= SEPARATOR_BRANCHING_FROM) return this.separatorAtMost(part, k);
     // Try the vertices of highest degree first: they are the likeliest tops of a shallow elimination tree;
     // in a grid shape, the cells nearest the middle of the window first (a balanced cut).
     const rest = c.clone();
@@ -314,6 +328,53 @@ export class TreeDepthSearch {
     memo.setLower(e, k + 1);
     this.noteIfRectangle(e, c);
     return false;
+  }
+
+  /**
+   * td(C) <= k for a connected grid shape C of more than two cells (so not complete) by its minimal
+   * separators: td(C) = min over them of |X| + max over the components D of C - X of td(D) (DESIGN,
+   * "Recursion"), each X of at most k - 1 cells and confined by the rectangle bound.
+   */
+  private separatorAtMost(part: Part, k: number): boolean {
+    const { c, e } = part;
+    const rest = new Bitset(this.n);
+    let chain: Int32Array | undefined;
+    const rectangles = this.canon!.separatorRectangles(c, k, this.rectangleValue, k - 1);
+    const found = this.separators!.forEach(
+      c,
+      k - 1,
+      rectangles,
+      (cells, count) => {
+        this.tick();
+        rest.copyFrom(c);
+        for (let i = 0; i < count; i++) rest.delete(cells[i]!);
+        const comps = this.components(rest);
+        if (comps.length < 2) return false;
+        const budget = k - count;
+        const parts = comps.map((d) => this.partOf(d));
+        for (const p of parts) if (this.memo.lower(p.e) > budget) return false;
+        for (const p of parts) if (this.memo.upper(p.e) > budget && !this.connectedPartAtMost(p, budget)) return false;
+        chain = cells.slice(0, count);
+        return true;
+      },
+      this.checkLimits,
+    );
+    if (!found) {
+      this.memo.setLower(e, k + 1);
+      this.noteIfRectangle(e, c);
+      return false;
+    }
+    // C - x1 - ... - xi fits in k - i labels with x(i+1) on top, for as long as it stays connected: the
+    // labelling reads the chain back from the memo.
+    const set = c.clone();
+    let p = part;
+    for (let i = 0; i < chain!.length; i++) {
+      if (this.memo.upper(p.e) > k - i) this.fitsWith(p, k - i, chain![i]!);
+      set.delete(chain![i]!);
+      if (i + 1 === chain!.length || this.components(set).length !== 1) break;
+      p = this.partOf(set.clone());
+    }
+    return true;
   }
 
   /** Records that the part fits in k labels with v on top. */

@@ -75,7 +75,8 @@ describe('EnginePool (real worker threads)', () => {
   it('stops an exact search at the memory limit with its proven interval and a verified ranking', async () => {
     const small = new EnginePool({ size: 1, memoryLimitMb: 32 });
     try {
-      const result = await small.run({ kind: 'solve', spec: 'grid:12x12', method: 'exact', timeLimitMs: 120_000 });
+      // A random graph: vertex branching fills the memo fast (grids branch over separators and keep few sets).
+      const result = await small.run({ kind: 'solve', spec: 'gnp:50:0.06:1', method: 'exact', timeLimitMs: 120_000 });
       if (result.kind !== 'solve') throw new Error('expected a solve result');
       const s = result.solution;
       expect(s.stats.stopReason).toBe('memory-limit');
