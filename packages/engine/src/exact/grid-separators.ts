@@ -100,25 +100,30 @@ export class GridSeparators {
       }
       regions++;
     }
-    // Each region's rim (the cells king-adjacent to it), and for each cell the regions it touches.
+    // Each region's rim (the cells king-adjacent to it), and for each cell the regions it touches (at
+    // most four: its eight neighbours alternate with the four it shares an edge with).
     const rimStart = new Int32Array(regions + 1);
-    const touches: number[][] = Array.from({ length: cells }, () => []);
+    const touches = new Int32Array(4 * cells).fill(-1);
     for (let p = 0; p < cells; p++) {
       if (vertexOf[p]! < 0) continue;
       const pr = (p / W) | 0;
       const pc = p - pr * W;
-      const list = touches[p]!;
+      let listed = 0;
       for (let d = 0; d < 8; d++) {
-        const t = (pr + KING_DR[d]!) * W + pc + KING_DC[d]!;
-        const o = region[t]!;
-        if (o >= 0 && !list.includes(o)) list.push(o);
+        const o = region[(pr + KING_DR[d]!) * W + pc + KING_DC[d]!]!;
+        if (o < 0) continue;
+        let known = false;
+        for (let j = 0; j < listed; j++) if (touches[4 * p + j] === o) known = true;
+        if (known) continue;
+        touches[4 * p + listed++] = o;
+        rimStart[o + 1]!++;
       }
-      for (const o of list) rimStart[o + 1]!++;
     }
     for (let o = 0; o < regions; o++) rimStart[o + 1]! += rimStart[o]!;
     const rim = new Int32Array(rimStart[regions]!);
     const fill = rimStart.slice(0, regions);
-    for (let p = 0; p < cells; p++) for (const o of touches[p]!) rim[fill[o]!++] = p;
+    for (let p = 0; p < cells; p++) for (let j = 0; j < 4 && touches[4 * p + j]! >= 0; j++) rim[fill[touches[4 * p + j]!]!++] = p;
+    const touchesRegion = (p: number, o: number) => touches[4 * p] === o || touches[4 * p + 1] === o || touches[4 * p + 2] === o || touches[4 * p + 3] === o;
     // For each cell, the rectangles it lies outside of (a list per cell), and a count per rectangle of
     // the path's cells outside it.
     const m = rectangles.length / 5;
@@ -192,7 +197,9 @@ export class GridSeparators {
           queue[tail++] = t;
         }
         if (!throughRegions) continue;
-        for (const o of touches[p]!) {
+        for (let j = 0; j < 4; j++) {
+          const o = touches[4 * p + j]!;
+          if (o < 0) break;
           if (seenRegion[o]) continue;
           seenRegion[o] = 1;
           for (let i = rimStart[o]!; i < rimStart[o + 1]!; i++) {
@@ -209,7 +216,7 @@ export class GridSeparators {
     let home = 0;
     const extendOpen = (p: number, len: number): boolean => {
       if ((++steps & 1023) === 0) pulse();
-      if (touches[p]!.includes(home) && (len === 1 || path[0]! < p) && report(len)) return true;
+      if (touchesRegion(p, home) && (len === 1 || path[0]! < p) && report(len)) return true;
       if (len === maxSize) return false;
       const pr = (p / W) | 0;
       const pc = p - pr * W;
@@ -218,7 +225,9 @@ export class GridSeparators {
         if (vertexOf[t]! < 0 || onPath[t] || len + 1 + dist[t]! > maxSize) continue;
         if (step(t, len, extendOpen)) return true;
       }
-      for (const o of touches[p]!) {
+      for (let j = 0; j < 4; j++) {
+        const o = touches[4 * p + j]!;
+        if (o < 0) break;
         if (o <= home || usedRegion[o]) continue;
         usedRegion[o] = 1;
         for (let i = rimStart[o]!; i < rimStart[o + 1]!; i++) {
@@ -280,6 +289,11 @@ export class GridSeparators {
     for (let i = 0; i < count; i++) {
       one[0] = (this.row[members[i]!]! - top) * W + this.col[members[i]!]! - left;
       start = one[0]!;
+      // A cycle that encloses a cell spans three rows at least (the shape's rows are 1 to H - 2 of the
+      // padded box); and its first cell must keep to the rectangles before distances are worth working out.
+      if (((start / W) | 0) + 2 > H - 2) continue;
+      if (!enter(start)) continue;
+      leave(start);
       distances(one, 0, 1, false);
       if (step(start, 0, extendClosed)) return true;
     }

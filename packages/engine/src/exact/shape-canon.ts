@@ -22,6 +22,9 @@ export interface CanonicalShape extends CellFrame {
  * decides each shape once wherever it appears. Only for graphs whose edges are exactly the side
  * adjacencies of their cells: grids, masks and staircases.
  */
+/** At most this many rectangles confine a separator: the tightest (least slack, then smallest) are kept. */
+const SEPARATOR_RECTANGLES = 256;
+
 export class ShapeCanon {
   private readonly row: Int32Array;
   private readonly col: Int32Array;
@@ -35,6 +38,8 @@ export class ShapeCanon {
   private least = new Uint32Array(0);
   /** Scratch of prefixCounts: valid until its next call. */
   private prefix = new Int32Array(0);
+  /** Scratch of separatorRectangles: each rectangle's slack. */
+  private slackTable = new Int32Array(0);
   /** What the last canonicalKey found: [symmetry, r0, c0, h, w]. */
   readonly lastFrame = new Int32Array(5);
 
@@ -237,33 +242,46 @@ export class ShapeCanon {
    * The rectangles that confine a separator X of `set` when |X| + td(set - X) <= k is asked: by the bound
    * of rectangleBound, td(set - X) >= value(R) - |R \ set| - |R ∩ X|, so X has at most
    * slack = k - value(R) + |R \ set| cells outside R. Returned as [r0, r1, c0, c1, slack] quintuples in grid
-   * coordinates, only those with slack below maxSize (the others cannot bind) and none whose constraint
-   * a smaller rectangle with no more slack already implies.
+   * coordinates, only those with slack below maxSize (the others cannot bind), leaving out those that a
+   * smaller rectangle inside, with no more slack, already implies.
    */
   separatorRectangles(set: Bitset, k: number, value: (h: number, w: number) => number, maxSize: number): Int32Array {
     const { r0, c0, H, W, stride, prefix } = this.prefixCounts(set);
+    // Every rectangle's slack (maxSize for those that cannot bind), by its rows and columns.
+    const size = H * H * W * W;
+    if (this.slackTable.length < size) this.slackTable = new Int32Array(size);
+    const slack = this.slackTable;
+    const at = (top: number, bottom: number, left: number, right: number) => ((top * H + bottom) * W + left) * W + right;
     const found: number[][] = [];
     for (let h = 1; h <= H; h++) {
       for (let w = 1; w <= W; w++) {
         const full = value(h, w);
-        if (k - full >= maxSize) continue; // even with no cell missing it cannot bind
         for (let r = 0; r + h <= H; r++) {
           for (let c = 0; c + w <= W; c++) {
             const inside = prefix[(r + h) * stride + c + w]! - prefix[r * stride + c + w]! - prefix[(r + h) * stride + c]! + prefix[r * stride + c]!;
-            const slack = k - full + (h * w - inside);
-            if (slack < maxSize) found.push([r, r + h - 1, c, c + w - 1, slack, h * w]);
+            const s = Math.min(maxSize, k - full + (h * w - inside));
+            slack[at(r, r + h - 1, c, c + w - 1)] = s;
+            if (s >= maxSize) continue;
+            // Implied by a rectangle one row or column smaller with no more slack (sizes come in
+            // increasing order, so those are filled in already; implication chains end in a kept one).
+            const b = r + h - 1;
+            const e = c + w - 1;
+            if (h > 1 && (slack[at(r + 1, b, c, e)]! <= s || slack[at(r, b - 1, c, e)]! <= s)) continue;
+            if (w > 1 && (slack[at(r, b, c + 1, e)]! <= s || slack[at(r, b, c, e - 1)]! <= s)) continue;
+            found.push([r + r0, b + r0, c + c0, e + c0, s, h * w]);
           }
         }
       }
     }
+    // Of those left, also leave out the ones a smaller rectangle anywhere inside implies.
     found.sort((a, b) => a[4]! - b[4]! || a[5]! - b[5]!);
     const kept: number[][] = [];
     for (const q of found) {
-      const implied = kept.some((p) => p[0]! >= q[0]! && p[1]! <= q[1]! && p[2]! >= q[2]! && p[3]! <= q[3]!);
-      if (!implied) kept.push(q);
+      if (kept.length === SEPARATOR_RECTANGLES) break;
+      if (!kept.some((p) => p[0]! >= q[0]! && p[1]! <= q[1]! && p[2]! >= q[2]! && p[3]! <= q[3]!)) kept.push(q);
     }
     const out = new Int32Array(5 * kept.length);
-    kept.forEach((q, i) => out.set([q[0]! + r0, q[1]! + r0, q[2]! + c0, q[3]! + c0, q[4]!], 5 * i));
+    kept.forEach((q, i) => out.set(q.slice(0, 5), 5 * i));
     return out;
   }
 

@@ -23,7 +23,7 @@ export interface SearchLimits {
 }
 
 /** Connected grid shapes of at least this many cells branch over separators, smaller ones over vertices. */
-const SEPARATOR_BRANCHING_FROM = 3;
+const SEPARATOR_BRANCHING_FROM = 12;
 
 /** One component of a vertex set, with its memo entry and (for grid shapes) its raw-set entry. */
 interface Part {
