@@ -86,6 +86,7 @@ export function exactTreeDepth(g: Graph, options: ExactOptions = {}): ExactResul
         report();
       };
       for (const rect of containedRectangles(g)) {
+        if (lower >= upper) break; // the start's ranking is optimal already: the rest would prove nothing new
         raise(search.treeDepth(rect.cells(), raise));
         report(); // the node count moves on even when the bound does not
       }

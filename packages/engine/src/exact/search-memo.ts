@@ -7,10 +7,18 @@ import { grown, SetTable } from './set-table';
  * for searches of minutes.
  */
 export class SearchMemo {
-  readonly table = new SetTable();
-  private lowers = new Int32Array(this.table.capacity);
-  private uppers = new Int32Array(this.table.capacity);
-  private choices = new Int32Array(this.table.capacity);
+  readonly table: SetTable;
+  private lowers: Int32Array;
+  private uppers: Int32Array;
+  private choices: Int32Array;
+
+  /** @param initialSlots the table's first size (it doubles as it fills): small graphs start small. */
+  constructor(initialSlots?: number) {
+    this.table = new SetTable(initialSlots);
+    this.lowers = new Int32Array(this.table.capacity);
+    this.uppers = new Int32Array(this.table.capacity);
+    this.choices = new Int32Array(this.table.capacity);
+  }
 
   get size(): number {
     return this.table.size;

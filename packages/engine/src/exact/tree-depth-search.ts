@@ -44,15 +44,15 @@ interface Part {
  * separator (ShapeCanon.separatorRectangles) as it confines a top (ShapeCanon.topWindow).
  */
 export class TreeDepthSearch {
-  readonly memo = new SearchMemo();
+  readonly memo: SearchMemo;
   nodes = 0;
   /**
    * Grid shapes: raw vertex set -> its memo entry and canonical frame (see entryOf), the frame as the
    * symmetry and box of ShapeCanon.frame.
    */
-  private readonly raw = new SetTable();
-  private rawEntry = new Int32Array(this.raw.capacity);
-  private rawFrame = new Int32Array(5 * this.raw.capacity);
+  private readonly raw: SetTable;
+  private rawEntry: Int32Array;
+  private rawFrame: Int32Array;
   /** The raw-set entry of the set entryOf looked up last (-1 for graphs that are not grid shapes). */
   private lastRaw = -1;
   private readonly n: number;
@@ -76,6 +76,12 @@ export class TreeDepthSearch {
     private readonly limits: SearchLimits = {},
   ) {
     this.n = g.vertexCount;
+    // Small graphs (the exact leaves of the grid constructions, hundreds of them) start with small tables.
+    const slots = this.n <= 24 ? 256 : undefined;
+    this.memo = new SearchMemo(slots);
+    this.raw = new SetTable(slots);
+    this.rawEntry = new Int32Array(this.raw.capacity);
+    this.rawFrame = new Int32Array(5 * this.raw.capacity);
     this.adj = Array.from({ length: this.n }, (_, v) => Bitset.of(this.n, g.neighbours(v)));
     this.rest = new Bitset(this.n);
     this.frontier = new Bitset(this.n);
