@@ -3,7 +3,7 @@ import { MessageChannel } from 'node:worker_threads';
 import { Piscina } from 'piscina';
 import { EngineError } from '../errors';
 import { fromTransferred } from './engine-error-transfer';
-import type { EngineTask, EngineTaskResult, ExactProgress, WorkerMessage, WorkerReply } from './task';
+import { isStarted, type EngineTask, type EngineTaskResult, type ExactProgress, type WorkerMessage, type WorkerReply } from './task';
 
 export interface EnginePoolOptions {
   /** Worker threads; the machine's core count by default. */
@@ -63,7 +63,6 @@ export class EnginePool {
     const stop = new SharedArrayBuffer(4);
     const flag = new Int32Array(stop);
     const { port1, port2 } = new MessageChannel();
-    if (options.onProgress) port1.on('message', options.onProgress);
     const hardStop = new AbortController();
     let killTimer: NodeJS.Timeout | undefined;
     const softStop = () => {
@@ -72,9 +71,15 @@ export class EnginePool {
     };
     if (options.signal?.aborted) softStop();
     options.signal?.addEventListener('abort', softStop, { once: true });
-    // A search honours its own time limit; the pool only steps in if the worker does not come back.
-    const overdue =
-      task.kind === 'solve' && task.timeLimitMs !== undefined ? setTimeout(softStop, task.timeLimitMs + this.graceMs) : undefined;
+    // A search honours its own time limit; the pool only steps in if the worker does not come back. The
+    // clock starts when a worker takes the task (its first message), not while it waits in the queue or
+    // a new thread starts up.
+    let overdue: NodeJS.Timeout | undefined;
+    port1.on('message', (m: unknown) => {
+      if (isStarted(m)) {
+        if (task.kind === 'solve' && task.timeLimitMs !== undefined) overdue ??= setTimeout(softStop, task.timeLimitMs + this.graceMs);
+      } else options.onProgress?.(m as ExactProgress);
+    });
     const message: WorkerMessage = { task, port: port2, stop, searchMemoryMb: this.searchMemoryMb };
     let reply: WorkerReply;
     try {

@@ -30,3 +30,10 @@ export interface WorkerMessage {
 }
 
 export type { ExactProgress };
+
+/** The worker's first message on a task's port: it has taken the task (the pool's overdue clock starts). */
+export const STARTED = { started: true } as const;
+
+export function isStarted(m: unknown): boolean {
+  return typeof m === 'object' && m !== null && (m as { started?: unknown }).started === true;
+}

@@ -3,7 +3,7 @@ import { verifyRanking } from '../ranking/verify';
 import { solve } from '../solve/solve';
 import { graphFromSpec } from '../spec/graph-from-spec';
 import { toTransferred } from './engine-error-transfer';
-import type { EngineTaskResult, WorkerMessage, WorkerReply } from './task';
+import { STARTED, type EngineTaskResult, type WorkerMessage, type WorkerReply } from './task';
 
 /**
  * The pool's worker: builds the graph from its spec and runs the task. The search is synchronous, so
@@ -19,6 +19,7 @@ export default function runTask(message: WorkerMessage): WorkerReply {
 }
 
 function runEngineTask({ task, port, stop, searchMemoryMb }: WorkerMessage): EngineTaskResult {
+  port.postMessage(STARTED); // the pool's overdue clock starts here
   const files = task.files ?? {};
   const graph = graphFromSpec(task.spec, (path) => {
     const content = files[path];

@@ -39,6 +39,24 @@ describe('EnginePool (real worker threads)', () => {
     expect(result.solution.stats.stopReason).toBe('time-limit');
   });
 
+  it('starts a queued task\'s overdue clock when a worker takes it, not when it was queued', async () => {
+    const one = new EnginePool({ size: 1, graceMs: 300 });
+    try {
+      // The second search waits about 1.5 s behind the first: counted from its queueing, the pool would
+      // stop it (aborted) 0.3 s into its own 1.5 s limit.
+      const [first, second] = await Promise.all([
+        one.run({ kind: 'solve', spec: 'grid:10x10', method: 'exact', timeLimitMs: 1500 }),
+        one.run({ kind: 'solve', spec: 'grid:10x10', method: 'exact', timeLimitMs: 1500 }),
+      ]);
+      for (const r of [first, second]) {
+        if (r.kind !== 'solve') throw new Error('expected a solve result');
+        expect(r.solution.stats.stopReason).toBe('time-limit');
+      }
+    } finally {
+      await one.close();
+    }
+  }, 30_000);
+
   it('fails a task with a clear error and carries on', async () => {
     await expect(pool.run({ kind: 'solve', spec: 'grdi:4x4' })).rejects.toThrow(/unknown graph family 'grdi'/);
     await expect(pool.run({ kind: 'solve', spec: 'mask:gone.mask' })).rejects.toThrow(/not sent with it/);
