@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { Bitset, gridGraph, maskGraph, seededRandom, type Graph } from '../src/index';
 import { GridSeparators } from '../src/exact/grid-separators';
+import { ShapeCanon } from '../src/exact/shape-canon';
 
 /** The cells of g in one piece with the most cells (breadth-first, written here apart from the engine). */
 function largestPiece(g: Graph): number[] {
@@ -61,7 +62,7 @@ function minimalSeparators(g: Graph, cells: number[]): string[] {
 
 function listed(g: Graph, cells: number[], maxSize: number, rectangles = new Int32Array(0)): Set<string> {
   const seen = new Set<string>();
-  new GridSeparators(g).forEach(
+  new GridSeparators(new ShapeCanon(g)).forEach(
     Bitset.of(g.vertexCount, cells),
     maxSize,
     rectangles,

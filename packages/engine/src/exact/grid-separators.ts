@@ -1,5 +1,5 @@
 import type { Bitset } from '../graph/bitset';
-import type { Graph } from '../graph/graph';
+import type { ShapeCanon } from './shape-canon';
 
 /** What visit hears: the cells of a candidate separator (vertex numbers) in `cells[0..count)`. */
 export type SeparatorVisit = (cells: Int32Array, count: number) => boolean;
@@ -19,27 +19,8 @@ const KING_DC = [-1, 0, 1, -1, 1, -1, 0, 1];
  * checks the components.
  */
 export class GridSeparators {
-  private readonly row: Int32Array;
-  private readonly col: Int32Array;
-  private readonly vertexAt: Int32Array;
-  private readonly cols: number;
-  private readonly members: Int32Array;
-
-  constructor(g: Graph) {
-    const layout = g.layout!;
-    this.cols = layout.cols;
-    const n = g.vertexCount;
-    this.row = new Int32Array(n);
-    this.col = new Int32Array(n);
-    this.members = new Int32Array(n);
-    this.vertexAt = new Int32Array(layout.rows * layout.cols).fill(-1);
-    for (let v = 0; v < n; v++) {
-      const cell = layout.cells[v]!;
-      this.row[v] = Math.floor(cell / layout.cols);
-      this.col[v] = cell % layout.cols;
-      this.vertexAt[cell] = v;
-    }
-  }
+  /** The shape's layout and its scratch member list (see ShapeCanon.scan). */
+  constructor(private readonly canon: ShapeCanon) {}
 
   /**
    * Calls visit for cell sets X of at most maxSize cells that include every minimal separator of the
@@ -50,21 +31,11 @@ export class GridSeparators {
   forEach(set: Bitset, maxSize: number, rectangles: Int32Array, visit: SeparatorVisit, pulse: () => void): boolean {
     if (maxSize < 1) return false;
     // The shape in a box padded by one cell all round, so that the outside is one region.
-    let count = 0;
-    let r0 = Infinity;
-    let r1 = -Infinity;
-    let c0 = Infinity;
-    let c1 = -Infinity;
-    const members = this.members;
-    set.forEach((v) => {
-      members[count++] = v;
-      const r = this.row[v]!;
-      const c = this.col[v]!;
-      if (r < r0) r0 = r;
-      if (r > r1) r1 = r;
-      if (c < c0) c0 = c;
-      if (c > c1) c1 = c;
-    });
+    const canon = this.canon;
+    const count = canon.scan(set);
+    // Copies: the visits below scan other sets with the same scratch.
+    const members = canon.members.slice(0, count);
+    const [r0, r1, c0, c1] = Array.from(canon.box) as [number, number, number, number];
     const top = r0 - 1;
     const left = c0 - 1;
     const H = r1 - r0 + 3;
@@ -73,7 +44,7 @@ export class GridSeparators {
     const vertexOf = new Int32Array(cells).fill(-1);
     for (let i = 0; i < count; i++) {
       const v = members[i]!;
-      vertexOf[(this.row[v]! - top) * W + this.col[v]! - left] = v;
+      vertexOf[(canon.row[v]! - top) * W + canon.col[v]! - left] = v;
     }
     // Missing cells by 8-connected region.
     const region = new Int32Array(cells).fill(-1);
@@ -287,7 +258,7 @@ export class GridSeparators {
     };
     const one = new Int32Array(1);
     for (let i = 0; i < count; i++) {
-      one[0] = (this.row[members[i]!]! - top) * W + this.col[members[i]!]! - left;
+      one[0] = (canon.row[members[i]!]! - top) * W + canon.col[members[i]!]! - left;
       start = one[0]!;
       // A cycle that encloses a cell spans three rows at least (the shape's rows are 1 to H - 2 of the
       // padded box); and its first cell must keep to the rectangles before distances are worth working out.

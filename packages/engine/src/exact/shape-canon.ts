@@ -26,13 +26,14 @@ export interface CanonicalShape extends CellFrame {
 const SEPARATOR_RECTANGLES = 256;
 
 export class ShapeCanon {
-  private readonly row: Int32Array;
-  private readonly col: Int32Array;
+  /** Each vertex's row and column in the layout. */
+  readonly row: Int32Array;
+  readonly col: Int32Array;
   private readonly vertexAt: Int32Array;
   private readonly cols: number;
   /** Scratch: the members of the set last scanned, and its bounding box [r0, r1, c0, c1]. */
-  private readonly members: Int32Array;
-  private readonly box = new Int32Array(4);
+  readonly members: Int32Array;
+  readonly box = new Int32Array(4);
   /** Scratch candidates of canonical(): the one being built and the least so far. */
   private candidate = new Uint32Array(0);
   private least = new Uint32Array(0);
@@ -68,7 +69,7 @@ export class ShapeCanon {
    * Lists the set's members into `this.members` (returned count) and its bounding box into `this.box`
    * (first and last row and column): scratch arrays, as this runs for every set the search meets.
    */
-  private scan(set: Bitset): number {
+  scan(set: Bitset): number {
     let r0 = Infinity;
     let r1 = -1;
     let c0 = Infinity;

@@ -88,7 +88,7 @@ export class TreeDepthSearch {
     this.grown = new Bitset(this.n);
     this.cuts = new CutVertices(g.offsets, g.targets);
     this.canon = ShapeCanon.applies(g) ? new ShapeCanon(g) : undefined;
-    this.separators = this.canon ? new GridSeparators(g) : undefined;
+    this.separators = this.canon ? new GridSeparators(this.canon) : undefined;
     // Before any is solved: the closed forms for sides 1 and 2 (Bodlaender et al. 1998; Alpert 2010) and
     // the treewidth bound min(h, w) + 1 (td >= tw + 1).
     this.rectangleSide = this.canon ? Math.max(g.layout!.rows, g.layout!.cols) + 1 : 0;
