@@ -27,6 +27,13 @@ function expectExact(g: Graph, expected: number, what: string) {
   if (verdict.valid) expect(verdict.maxLabel, what).toBe(expected);
 }
 
+/** td of a whole graph by one search: the largest over its components (each by deepening). */
+function treeDepthOf(search: TreeDepthSearch, g: Graph): number {
+  let best = 0;
+  for (const c of search.components(Bitset.full(g.vertexCount))) best = Math.max(best, search.treeDepth(c));
+  return best;
+}
+
 function randomMask(cells: number, seed: number): Graph {
   const rand = seededRandom(seed);
   const rows = 2 + Math.floor(rand() * 4);
@@ -48,6 +55,21 @@ describe('exactTreeDepth', () => {
       const g = randomMask(8 + (seed % 13), seed);
       expectExact(g, bruteForceTreeDepth(g), `mask seed ${seed}`);
     }
+  });
+
+  it('branches over separators on grid shapes to the same values as over single tops, on 60 random masks of 20 to 34 cells and grids up to 5 x 7', () => {
+    const both = (g: Graph, what: string) => {
+      const all = Bitset.full(g.vertexCount);
+      const bySeparators = new TreeDepthSearch(g);
+      const byTops = new TreeDepthSearch(g, {}, 'vertex');
+      const value = treeDepthOf(bySeparators, g);
+      expect(value, what).toBe(treeDepthOf(byTops, g));
+      const labels = new Int32Array(g.vertexCount);
+      bySeparators.label(all, value, labels);
+      expect(verifyRanking(g, labels), what).toMatchObject({ valid: true, maxLabel: value });
+    };
+    for (let seed = 1; seed <= 60; seed++) both(randomMask(20 + (seed % 15), 1000 + seed), `mask seed ${1000 + seed}`);
+    for (const [m, n] of [[4, 5], [4, 6], [5, 5], [4, 7], [5, 6], [5, 7]] as const) both(gridGraph(m, n), `${m}x${n}`);
   });
 
   it('equals the brute force on random graphs of at most 16 vertices', () => {

@@ -74,6 +74,8 @@ export class TreeDepthSearch {
   constructor(
     g: Graph,
     private readonly limits: SearchLimits = {},
+    /** 'vertex' branches over the top vertex on grid shapes too (a second method, for checking). */
+    branching: 'auto' | 'vertex' = 'auto',
   ) {
     this.n = g.vertexCount;
     // Small graphs (the exact leaves of the grid constructions, hundreds of them) start with small tables.
@@ -88,7 +90,7 @@ export class TreeDepthSearch {
     this.grown = new Bitset(this.n);
     this.cuts = new CutVertices(g.offsets, g.targets);
     this.canon = ShapeCanon.applies(g) ? new ShapeCanon(g) : undefined;
-    this.separators = this.canon ? new GridSeparators(this.canon) : undefined;
+    this.separators = this.canon && branching === 'auto' ? new GridSeparators(this.canon) : undefined;
     // Before any is solved: the closed forms for sides 1 and 2 (Bodlaender et al. 1998; Alpert 2010) and
     // the treewidth bound min(h, w) + 1 (td >= tw + 1).
     this.rectangleSide = this.canon ? Math.max(g.layout!.rows, g.layout!.cols) + 1 : 0;
