@@ -60,21 +60,125 @@ function minimalSeparators(g: Graph, cells: number[]): string[] {
   return out;
 }
 
+/**
+ * The minimal separators of at most `cap` vertices, all taken from `among` (at most 30 of them), of a
+ * connected graph of at most 60 vertices, by brute force over subsets as two-word bitmasks (the same
+ * full-component characterisation as above).
+ */
+function smallMinimalSeparators(g: Graph, cap: number, among = Array.from({ length: g.vertexCount }, (_, v) => v)): string[] {
+  const n = g.vertexCount;
+  if (n > 60 || among.length > 30) throw new Error('brute force: too large');
+  const bit = (v: number): [number, number] => (v < 30 ? [1 << v, 0] : [0, 1 << (v - 30)]);
+  const nearLo = new Int32Array(n);
+  const nearHi = new Int32Array(n);
+  for (let v = 0; v < n; v++) {
+    for (const w of g.neighbours(v)) {
+      const [lo, hi] = bit(w);
+      nearLo[v]! |= lo;
+      nearHi[v]! |= hi;
+    }
+  }
+  const allLo = n >= 30 ? (1 << 30) - 1 : (1 << n) - 1;
+  const allHi = n > 30 ? (1 << (n - 30)) - 1 : 0;
+  const lowest = (bits: number) => 31 - Math.clz32(bits & -bits);
+  const out: string[] = [];
+  const m = among.length;
+  for (let k = 1; k <= Math.min(cap, m, n - 2); k++) {
+    // Every k-subset of `among` in turn (Gosper's hack, common practice).
+    for (let pick = (1 << k) - 1; pick < 1 << m; ) {
+      let xLo = 0;
+      let xHi = 0;
+      for (let bits = pick; bits !== 0; bits &= bits - 1) {
+        const [lo, hi] = bit(among[lowest(bits)]!);
+        xLo |= lo;
+        xHi |= hi;
+      }
+      let restLo = allLo & ~xLo;
+      let restHi = allHi & ~xHi;
+      let full = 0;
+      while ((restLo !== 0 || restHi !== 0) && full < 2) {
+        let pieceLo = restLo & -restLo;
+        let pieceHi = pieceLo === 0 ? restHi & -restHi : 0;
+        let frontierLo = pieceLo;
+        let frontierHi = pieceHi;
+        let touchedLo = 0;
+        let touchedHi = 0;
+        while (frontierLo !== 0 || frontierHi !== 0) {
+          let v: number;
+          if (frontierLo !== 0) {
+            v = lowest(frontierLo);
+            frontierLo &= frontierLo - 1;
+          } else {
+            v = 30 + lowest(frontierHi);
+            frontierHi &= frontierHi - 1;
+          }
+          const growLo = nearLo[v]! & ~xLo & ~pieceLo;
+          const growHi = nearHi[v]! & ~xHi & ~pieceHi;
+          touchedLo |= nearLo[v]! & xLo;
+          touchedHi |= nearHi[v]! & xHi;
+          pieceLo |= growLo;
+          pieceHi |= growHi;
+          frontierLo |= growLo;
+          frontierHi |= growHi;
+        }
+        restLo &= ~pieceLo;
+        restHi &= ~pieceHi;
+        if (touchedLo === xLo && touchedHi === xHi) full++;
+      }
+      if (full >= 2) {
+        const x: number[] = [];
+        for (let bits = pick; bits !== 0; bits &= bits - 1) x.push(among[lowest(bits)]!);
+        out.push(x.sort((p, q) => p - q).join(','));
+      }
+      const low = pick & -pick;
+      const r = pick + low;
+      pick = (((r ^ pick) >>> 2) / low) | r;
+    }
+  }
+  return out;
+}
+
+/** A random connected mask of rows x cols with about `fill` of its cells (retried until it is in one piece). */
+function connectedMask(rand: () => number, rows: number, cols: number, fill: number): Graph {
+  for (;;) {
+    const g = maskGraph({ rows, cols, present: new Uint8Array(rows * cols).map(() => (rand() < fill ? 1 : 0)) });
+    if (g.vertexCount >= 4 && largestPiece(g).length === g.vertexCount) return g;
+  }
+}
+
+/** Whether vertex v of a shape has all eight king neighbours in it (so no missing region's face is near). */
+function deepInside(g: Graph, v: number): boolean {
+  const { rows, cols, cells } = g.layout!;
+  const r = Math.floor(cells[v]! / cols);
+  const c = cells[v]! % cols;
+  for (let dr = -1; dr <= 1; dr++) {
+    for (let dc = -1; dc <= 1; dc++) {
+      const rr = r + dr;
+      const cc = c + dc;
+      if (rr < 0 || cc < 0 || rr >= rows || cc >= cols || !Array.from(cells).includes(rr * cols + cc)) return false;
+    }
+  }
+  return true;
+}
+
 function listed(g: Graph, cells: number[], maxSize: number, rectangles = new Int32Array(0)): Set<string> {
   const seen = new Set<string>();
+  const inShape = new Set(cells);
+  const wrong: string[] = [];
   new GridSeparators(new ShapeCanon(g)).forEach(
     Bitset.of(g.vertexCount, cells),
     maxSize,
     rectangles,
     (found, count) => {
       const x = Array.from(found.subarray(0, count)).sort((a, b) => a - b);
-      expect(x.every((v) => cells.includes(v))).toBe(true);
-      expect(new Set(x).size).toBe(count);
+      // Collected and asserted once at the end: listings run to 10^5 sets.
+      if (!x.every((v) => inShape.has(v)) || new Set(x).size !== count) wrong.push(x.join(','));
       seen.add(x.join(','));
       return false;
     },
     () => {},
   );
+  expect(wrong, 'sets with a cell outside the shape or a cell twice').toEqual([]);
   return seen;
 }
 
@@ -131,5 +235,76 @@ describe('GridSeparators', () => {
     const wanted = minimalSeparators(g, cells).filter((x) => x.split(',').length <= 5 && fits(x.split(',').map(Number)));
     expect(wanted.length).toBeGreaterThan(3);
     for (const x of wanted) expect(seen.has(x), `{${x}}`).toBe(true);
+  });
+  it('lists every minimal separator of up to 7 cells of the 5 x 6 grid and of 12 random 5 x 6 masks', () => {
+    const rand = seededRandom(2026);
+    const shapes = [gridGraph(5, 6), ...Array.from({ length: 12 }, () => connectedMask(rand, 5, 6, 0.85))];
+    let separators = 0;
+    for (const [i, g] of shapes.entries()) {
+      const seen = listed(g, Array.from({ length: g.vertexCount }, (_, v) => v), 7);
+      for (const x of smallMinimalSeparators(g, 7)) {
+        expect(seen.has(x), `shape ${i}: separator {${x}}`).toBe(true);
+        separators++;
+      }
+    }
+    expect(separators).toBeGreaterThan(4000);
+  });
+
+  // A separator that stays clear of every missing region is a closed king cycle (no region to jump
+  // through): these shapes have room for many, up to 8 cells.
+  it('lists every minimal separator of up to 8 cells clear of the missing regions, on grids up to 7 x 7 and masks with holes', () => {
+    const rand = seededRandom(31);
+    const holed = (rows: number, cols: number, gone: number[]) =>
+      maskGraph({ rows, cols, present: new Uint8Array(rows * cols).map((_, p) => (gone.includes(p) ? 0 : 1)) });
+    const shapes = [gridGraph(6, 6), gridGraph(6, 7), holed(7, 7, [24]), holed(7, 8, [26, 27]), connectedMask(rand, 7, 7, 0.95), connectedMask(rand, 7, 8, 0.95)];
+    let rings = 0;
+    for (const [i, g] of shapes.entries()) {
+      const deep = Array.from({ length: g.vertexCount }, (_, v) => v).filter((v) => deepInside(g, v));
+      const seen = listed(g, Array.from({ length: g.vertexCount }, (_, v) => v), 8);
+      for (const x of smallMinimalSeparators(g, 8, deep.slice(0, 30))) {
+        expect(seen.has(x), `shape ${i}: separator {${x}}`).toBe(true);
+        rings++;
+      }
+    }
+    expect(rings).toBeGreaterThan(100);
+  });
+
+  it('keeps to many rectangles at once (four to a word), and lists every minimal separator that does', () => {
+    const rand = seededRandom(77);
+    let wanted = 0;
+    for (let round = 0; round < 8; round++) {
+      const g = round === 0 ? gridGraph(5, 6) : connectedMask(rand, 5, 6, 0.85);
+      const boxes: number[] = [];
+      for (let i = 0; i < 11; i++) {
+        const r0 = Math.floor(rand() * 3);
+        const c0 = Math.floor(rand() * 3);
+        const r1 = r0 + 1 + Math.floor(rand() * (4 - r0));
+        const c1 = c0 + 1 + Math.floor(rand() * (5 - c0));
+        // One rectangle with no slack in some rounds; one that cannot bind (more slack than a lane holds).
+        const slack = i === 0 && round % 2 === 1 ? 0 : i === 1 ? 200 : 1 + Math.floor(rand() * 4);
+        boxes.push(r0, r1, c0, c1, slack);
+      }
+      const { cols, cells: at } = g.layout!;
+      const fits = (x: number[]) => {
+        for (let i = 0; i < boxes.length; i += 5) {
+          const outside = x.filter((v) => {
+            const r = Math.floor(at[v]! / cols);
+            const c = at[v]! % cols;
+            return r < boxes[i]! || r > boxes[i + 1]! || c < boxes[i + 2]! || c > boxes[i + 3]!;
+          }).length;
+          if (outside > boxes[i + 4]!) return false;
+        }
+        return true;
+      };
+      const cells = Array.from({ length: g.vertexCount }, (_, v) => v);
+      const seen = listed(g, cells, 6, Int32Array.from(boxes));
+      for (const x of seen) expect(fits(x.split(',').map(Number)), `round ${round}: {${x}}`).toBe(true);
+      for (const x of smallMinimalSeparators(g, 6)) {
+        if (!fits(x.split(',').map(Number))) continue;
+        expect(seen.has(x), `round ${round}: separator {${x}}`).toBe(true);
+        wanted++;
+      }
+    }
+    expect(wanted).toBeGreaterThan(20);
   });
 });
