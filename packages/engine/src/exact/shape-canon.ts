@@ -39,8 +39,10 @@ export class ShapeCanon {
   private least = new Uint32Array(0);
   /** Scratch of prefixCounts: valid until its next call. */
   private prefix = new Int32Array(0);
-  /** Scratch of separatorRectangles: each rectangle's slack. */
+  /** Scratch of separatorRectangles: for each rectangle, the least slack of one inside it. */
   private slackTable = new Int32Array(0);
+  /** Scratch of separatorRectangles: the rectangles no smaller one implies. */
+  private foundTable = new Int32Array(0);
   /** What the last canonicalKey found: [symmetry, r0, c0, h, w]. */
   readonly lastFrame = new Int32Array(5);
 
@@ -244,16 +246,22 @@ export class ShapeCanon {
    * of rectangleBound, td(set - X) >= value(R) - |R \ set| - |R ∩ X|, so X has at most
    * slack = k - value(R) + |R \ set| cells outside R. Returned as [r0, r1, c0, c1, slack] quintuples in grid
    * coordinates, only those with slack below maxSize (the others cannot bind), leaving out those that a
-   * smaller rectangle inside, with no more slack, already implies.
+   * smaller rectangle inside, with no more slack, already implies, and of those the SEPARATOR_RECTANGLES
+   * tightest.
    */
   separatorRectangles(set: Bitset, k: number, value: (h: number, w: number) => number, maxSize: number): Int32Array {
     const { r0, c0, H, W, stride, prefix } = this.prefixCounts(set);
-    // Every rectangle's slack (maxSize for those that cannot bind), by its rows and columns.
+    // For every rectangle (by its rows and columns), the least slack of a rectangle inside it, itself
+    // included; sizes come in increasing order, so those one row or column smaller are filled in already.
     const size = H * H * W * W;
     if (this.slackTable.length < size) this.slackTable = new Int32Array(size);
-    const slack = this.slackTable;
+    const least = this.slackTable;
     const at = (top: number, bottom: number, left: number, right: number) => ((top * H + bottom) * W + left) * W + right;
-    const found: number[][] = [];
+    // The candidates as [r0, r1, c0, c1, slack] in found, with order keys slack * (H * W + 1) + area.
+    const rectangles = ((H * (H + 1)) / 2) * ((W * (W + 1)) / 2);
+    if (this.foundTable.length < 5 * rectangles) this.foundTable = new Int32Array(5 * rectangles);
+    const found = this.foundTable;
+    let count = 0;
     for (let h = 1; h <= H; h++) {
       for (let w = 1; w <= W; w++) {
         const full = value(h, w);
@@ -261,28 +269,37 @@ export class ShapeCanon {
           for (let c = 0; c + w <= W; c++) {
             const inside = prefix[(r + h) * stride + c + w]! - prefix[r * stride + c + w]! - prefix[(r + h) * stride + c]! + prefix[r * stride + c]!;
             const s = Math.min(maxSize, k - full + (h * w - inside));
-            slack[at(r, r + h - 1, c, c + w - 1)] = s;
-            if (s >= maxSize) continue;
-            // Implied by a rectangle one row or column smaller with no more slack (sizes come in
-            // increasing order, so those are filled in already; implication chains end in a kept one).
             const b = r + h - 1;
             const e = c + w - 1;
-            if (h > 1 && (slack[at(r + 1, b, c, e)]! <= s || slack[at(r, b - 1, c, e)]! <= s)) continue;
-            if (w > 1 && (slack[at(r, b, c + 1, e)]! <= s || slack[at(r, b, c, e - 1)]! <= s)) continue;
-            found.push([r + r0, b + r0, c + c0, e + c0, s, h * w]);
+            let inner = maxSize;
+            if (h > 1) inner = Math.min(inner, least[at(r + 1, b, c, e)]!, least[at(r, b - 1, c, e)]!);
+            if (w > 1) inner = Math.min(inner, least[at(r, b, c + 1, e)]!, least[at(r, b, c, e - 1)]!);
+            least[at(r, b, c, e)] = Math.min(s, inner);
+            // A rectangle inside with no more slack implies this one; those with maxSize cannot bind.
+            if (s >= inner) continue;
+            const q = 5 * count++;
+            found[q] = r + r0;
+            found[q + 1] = b + r0;
+            found[q + 2] = c + c0;
+            found[q + 3] = e + c0;
+            found[q + 4] = s;
           }
         }
       }
     }
-    // Of those left, also leave out the ones a smaller rectangle anywhere inside implies.
-    found.sort((a, b) => a[4]! - b[4]! || a[5]! - b[5]!);
-    const kept: number[][] = [];
-    for (const q of found) {
-      if (kept.length === SEPARATOR_RECTANGLES) break;
-      if (!kept.some((p) => p[0]! >= q[0]! && p[1]! <= q[1]! && p[2]! >= q[2]! && p[3]! <= q[3]!)) kept.push(q);
+    // The tightest first, and of equal slack the smallest: a counting sort by key, cut at the cap.
+    const keyOf = (q: number) => found[q + 4]! * (H * W + 1) + (found[q + 1]! - found[q]! + 1) * (found[q + 3]! - found[q + 2]! + 1);
+    const keys = maxSize * (H * W + 1);
+    const place = new Int32Array(keys + 1);
+    for (let i = 0; i < count; i++) place[keyOf(5 * i) + 1]!++;
+    for (let key = 0; key < keys; key++) place[key + 1]! += place[key]!;
+    const kept = Math.min(count, SEPARATOR_RECTANGLES);
+    const out = new Int32Array(5 * kept);
+    for (let i = 0; i < count; i++) {
+      const q = 5 * i;
+      const to = place[keyOf(q)]!++;
+      if (to < kept) out.set(found.subarray(q, q + 5), 5 * to);
     }
-    const out = new Int32Array(5 * kept.length);
-    kept.forEach((q, i) => out.set(q.slice(0, 5), 5 * i));
     return out;
   }
 
