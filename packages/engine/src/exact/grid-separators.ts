@@ -204,12 +204,13 @@ export class GridSeparators {
     const out = new Int32Array(maxSize);
     const dist = new Int32Array(cells);
     const queue = new Int32Array(cells);
-    // The local test of a minimal separator: along the cycle of faces and cells that it is (see the class
-    // comment), the full components lie on its two sides, and every separator cell has an edge into each
-    // (Dirac's lemma: each vertex of a minimal separator has a neighbour in every full component), so both
-    // sides of a cell, between the faces the cycle enters and leaves it by, hold an edge to a cell off the
-    // path. Where a face might be a missing region's, the test is skipped. `back[i]` is the direction from
-    // path[i] to path[i - 1] when that step went through a unit square, else -1.
+    // The local test of a minimal separator: it has two full components, each with a neighbour of every
+    // one of its cells (the full-component characterisation, common practice), and along the cycle of
+    // faces and cells that it is (see the class comment) they lie on its two sides; an edge meets the
+    // cycle only at its ends, so both sides of a cell, between the faces the cycle enters and leaves it
+    // by, hold an edge to a cell off the path. Where a face might be a missing region's, the test is
+    // skipped. `back[i]` is the direction from path[i] to path[i - 1] when that step went through a unit
+    // square, else -1.
     const offset = KING_DR.map((dr, d) => dr * W + KING_DC[d]!);
     const squares = new Uint8Array(cells); // bit i: the unit square at direction 2i + 1 has four cells
     const edges = new Uint8Array(cells); // bit e: the cell at direction 2e is in the shape
