@@ -32,7 +32,7 @@ describe('the cairn command', () => {
   });
 
   it('solve stops at its time limit with bounds only and exit status 3', async () => {
-    const { code, stdout } = await cairn(['solve', 'grid:9x9', '--time-limit', '0.5', '--json', '--quiet']);
+    const { code, stdout } = await cairn(['solve', 'grid:12x12', '--time-limit', '0.5', '--json', '--quiet']);
     expect(code).toBe(3);
     const result = SolveResult.parse(JSON.parse(stdout));
     expect(result.rankNumber).toBeNull();

@@ -17,7 +17,7 @@ describe('restarting the server mid-run', () => {
     const key = await insertMemberWithKey('restart-owner', 'researcher');
     server = await startBuiltServer(env);
     const submit = async (body: unknown) => (await api<RunView>(server!.url, 'POST', '/api/v1/runs', key, body)).body;
-    const long = await submit({ spec: 'grid:6x10', method: 'exact', timeLimitSeconds: 3 });
+    const long = await submit({ spec: 'grid:13x13', method: 'exact', timeLimitSeconds: 3 });
     await waitForRun(server.url, long.id, key, (r) => r.status === 'running');
     const waiting = [await submit({ spec: 'path:25' }), await submit({ spec: 'cycle:14' }), await submit({ spec: 'star:23' })];
     const ids = [long.id, ...waiting.map((r) => r.id)];
@@ -49,6 +49,6 @@ describe('restarting the server mid-run', () => {
     // Each graph was written to the atlas once, by its run
     // (no other test file runs these graphs: the files share one database).
     const atlas = await sql<{ graph_key: string; upper_run_id: string }>(`SELECT graph_key, upper_run_id FROM atlas_entries WHERE upper_run_id = ANY($1::uuid[]) ORDER BY graph_key`, [ids]);
-    expect(atlas.map((a) => a.graph_key)).toEqual(['cycle:14', 'grid:6x10', 'path:25', 'star:23']);
+    expect(atlas.map((a) => a.graph_key)).toEqual(['cycle:14', 'grid:13x13', 'path:25', 'star:23']);
   }, 120_000);
 });

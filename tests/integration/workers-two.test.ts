@@ -30,7 +30,7 @@ const submit = async (body: unknown) => {
 describe('two worker processes and an API process', () => {
   it('share out the runs: all finish, both workers compute, none twice', async () => {
     // Each search stops at its 1 s limit, so the runs take long enough for both workers to get some.
-    const specs = ['grid:6x6', 'grid:6x7', 'grid:6x8', 'grid:7x7', 'grid:7x8', 'grid:6x9', 'grid:7x9', 'grid:8x8'];
+    const specs = ['grid:11x12', 'grid:11x13', 'grid:11x14', 'grid:11x15', 'grid:12x13', 'grid:12x14', 'grid:12x15', 'grid:13x14'];
     const runs = [];
     for (const spec of specs) runs.push(await submit({ spec, method: 'exact', timeLimitSeconds: 1 }));
     const finished = await Promise.all(runs.map((r) => waitForRun(server.url, r.id, key)));
@@ -48,7 +48,7 @@ describe('two worker processes and an API process', () => {
   }, 90_000);
 
   it('streams a run computed by another process as server-sent events from the API process', async () => {
-    const run = await submit({ spec: 'grid:9x10', method: 'exact', timeLimitSeconds: 2 });
+    const run = await submit({ spec: 'grid:11x11', method: 'exact', timeLimitSeconds: 2 });
     const res = await fetch(`${server.url}/api/v1/runs/${run.id}/events`, { headers: { authorization: key } });
     expect(res.headers.get('content-type')).toMatch(/^text\/event-stream/);
     const text = await res.text(); // the server ends the stream after the final event
@@ -58,7 +58,7 @@ describe('two worker processes and an API process', () => {
   }, 60_000);
 
   it('finishes the run of a worker killed mid-run on the other worker', async () => {
-    const run = await submit({ spec: 'grid:7x10', method: 'exact', timeLimitSeconds: 4 });
+    const run = await submit({ spec: 'grid:12x16', method: 'exact', timeLimitSeconds: 4 });
     const running = await waitForRun(server.url, run.id, key, (r) => r.status === 'running');
     expect(running.attempts).toBe(1);
     const [{ worker }] = (await sql<{ worker: string }>(`SELECT worker FROM runs WHERE id = $1`, [run.id])) as [{ worker: string }];
@@ -72,7 +72,7 @@ describe('two worker processes and an API process', () => {
     expect(done.result!.verified).toBe(true);
     const [row] = await sql<{ worker: string; attempts: number }>(`SELECT worker, attempts FROM runs WHERE id = $1`, [run.id]);
     expect(row).toEqual({ worker: survivor.name, attempts: 2 });
-    const atlas = await sql<{ upper_run_id: string }>(`SELECT upper_run_id FROM atlas_entries WHERE graph_key = 'grid:7x10'`);
+    const atlas = await sql<{ upper_run_id: string }>(`SELECT upper_run_id FROM atlas_entries WHERE graph_key = 'grid:12x16'`);
     expect(atlas).toEqual([{ upper_run_id: run.id }]);
     workers = workers.filter((w) => w !== victim);
   }, 90_000);

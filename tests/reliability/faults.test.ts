@@ -45,7 +45,7 @@ describe('faults', () => {
   it('finishes every run exactly once after the server is killed with SIGKILL mid-run', async () => {
     const key = await insertMemberWithKey('faults-sigkill', 'researcher');
     server = await startBuiltServer(env);
-    const long = await submit(server.url, key, { spec: 'grid:6x11', method: 'exact', timeLimitSeconds: 4 });
+    const long = await submit(server.url, key, { spec: 'grid:13x15', method: 'exact', timeLimitSeconds: 4 });
     await waitForRun(server.url, long.id, key, (r) => r.status === 'running');
     const waiting = [];
     for (const spec of ['path:31', 'cycle:19', 'staircase:5']) waiting.push(await submit(server.url, key, { spec }));
@@ -90,7 +90,7 @@ describe('faults', () => {
     expect(longJobs.length + longJobs.reduce((s, j) => s + j.retries, 0)).toBe(2);
     // One atlas write per graph, by its run (no other test file runs these four graphs).
     const atlas = await sql<{ graph_key: string; upper_run_id: string }>(`SELECT graph_key, upper_run_id FROM atlas_entries WHERE upper_run_id = ANY($1::uuid[]) ORDER BY graph_key`, [ids]);
-    expect(atlas.map((a) => a.graph_key)).toEqual(['cycle:19', 'grid:6x11', 'path:31', 'staircase:5']);
+    expect(atlas.map((a) => a.graph_key)).toEqual(['cycle:19', 'grid:13x15', 'path:31', 'staircase:5']);
     expect(new Set(atlas.map((a) => a.upper_run_id))).toEqual(new Set(ids));
 
     recordReliability('sigkillMidRun', {
@@ -276,7 +276,7 @@ describe('faults', () => {
   it('keeps the best bounds so far, with a verifiable certificate, when a search is cancelled', async () => {
     const key = await insertMemberWithKey('faults-cancel', 'researcher');
     server ??= await startBuiltServer(env);
-    const spec = 'grid:7x11';
+    const spec = 'grid:13x16';
     const run = await submit(server.url, key, { spec, method: 'exact', timeLimitSeconds: 60 });
     const running = await waitForRun(server.url, run.id, key, (r) => r.status === 'running' && r.progress !== null && r.progress.nodes > 0, 30_000);
     const cancelAskedAt = Date.now();

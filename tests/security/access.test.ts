@@ -482,15 +482,15 @@ describe('limits by member and role', () => {
   });
 
   it('a researcher (by API key) at the limit of runs queued or running gets 429 and nothing is stored; after a cancel they may submit again', async () => {
-    // Exact searches on 10 x n grids do not finish within this test: they stay queued or running.
-    for (const spec of ['grid:10x11', 'grid:10x12', 'grid:10x13']) {
+    // Exact searches on 14 x n grids do not finish within this test: they stay queued or running.
+    for (const spec of ['grid:14x15', 'grid:14x16', 'grid:14x17']) {
       const res = await limitedCall('POST', '/api/v1/runs', JSON.stringify({ spec, method: 'exact', timeLimitSeconds: 600 }));
       expect(res.status, spec).toBe(202);
       wrenRuns.push(((await res.json()) as RunView).id);
     }
     expect(await activeRunsOfWren()).toBe(limit);
     const counts = await rowCounts();
-    const refused = await limitedCall('POST', '/api/v1/runs', JSON.stringify({ spec: 'grid:10x14', method: 'exact', timeLimitSeconds: 600 }));
+    const refused = await limitedCall('POST', '/api/v1/runs', JSON.stringify({ spec: 'grid:14x18', method: 'exact', timeLimitSeconds: 600 }));
     expect(refused.status).toBe(429);
     expect(await refused.json()).toEqual({
       error: {
@@ -500,13 +500,13 @@ describe('limits by member and role', () => {
       },
     });
     expect(await rowCounts()).toEqual(counts);
-    expect(await sql(`SELECT id FROM runs WHERE graph_key = 'grid:10x14'`)).toHaveLength(0);
+    expect(await sql(`SELECT id FROM runs WHERE graph_key = 'grid:14x18'`)).toHaveLength(0);
 
     const cancelled = await limitedCall('POST', `/api/v1/runs/${wrenRuns[0]}/cancel`);
     expect(cancelled.status).toBe(202);
     // A queued run is cancelled at once; a running one as soon as its worker sees the request.
     await waitForRun(server.url, wrenRuns[0]!, `Bearer ${wrenKey}`);
-    const again = await limitedCall('POST', '/api/v1/runs', JSON.stringify({ spec: 'grid:10x14', method: 'exact', timeLimitSeconds: 600 }));
+    const again = await limitedCall('POST', '/api/v1/runs', JSON.stringify({ spec: 'grid:14x18', method: 'exact', timeLimitSeconds: 600 }));
     expect(again.status).toBe(202);
     wrenRuns.push(((await again.json()) as RunView).id);
     expect(await activeRunsOfWren()).toBe(limit);

@@ -36,7 +36,7 @@ async function jobsOf(runId: string): Promise<Record<string, number>> {
 
 describe('closing and starting the run workers', () => {
   it('gives a running run back to the queue on close and finishes every run once after a new start', async () => {
-    const long = await submit({ spec: 'grid:9x10', method: 'exact', timeLimitSeconds: 3 });
+    const long = await submit({ spec: 'grid:12x12', method: 'exact', timeLimitSeconds: 3 });
     await waitForRun(h, long.id, owner, (r) => r.status === 'running');
     const queued = [await submit({ spec: 'path:20' }), await submit({ spec: 'cycle:12' }), await submit({ spec: 'grid:3x3' })];
     const ids = [long.id, ...queued.map((r) => r.id)];
@@ -68,10 +68,10 @@ describe('closing and starting the run workers', () => {
     expect(await jobsOf(long.id)).toEqual({ completed: 2 });
     for (const r of queued) expect(await jobsOf(r.id)).toEqual({ completed: 1 });
     const atlas = (await h.source.query(`SELECT graph_key, upper_run_id FROM atlas_entries WHERE graph_key = ANY($1) ORDER BY graph_key`, [
-      ['grid:9x10', 'path:20', 'cycle:12', 'grid:3x3'],
+      ['grid:12x12', 'path:20', 'cycle:12', 'grid:3x3'],
     ])) as { graph_key: string; upper_run_id: string }[];
-    expect(atlas.map((a) => a.graph_key)).toEqual(['cycle:12', 'grid:3x3', 'grid:9x10', 'path:20']);
-    expect(atlas.find((a) => a.graph_key === 'grid:9x10')!.upper_run_id).toBe(long.id);
+    expect(atlas.map((a) => a.graph_key)).toEqual(['cycle:12', 'grid:12x12', 'grid:3x3', 'path:20']);
+    expect(atlas.find((a) => a.graph_key === 'grid:12x12')!.upper_run_id).toBe(long.id);
   });
 
   it('re-queues at start-up a run left running by a worker that is gone, and fails one started too often', async () => {

@@ -56,7 +56,7 @@ const open = (id: string, authorization = owner, signal?: AbortSignal) => fetch(
 describe('run events', () => {
   it('streams progress while the search runs, then the finished run, then ends', async () => {
     // A search the 3 s limit stops: it reports progress as it proves bounds.
-    const run = await submit({ spec: 'grid:9x10', method: 'exact', timeLimitSeconds: 3 });
+    const run = await submit({ spec: 'grid:12x12', method: 'exact', timeLimitSeconds: 3 });
     const res = await open(run.id);
     expect(res.status).toBe(200);
     expect(res.headers.get('content-type')).toMatch(/^text\/event-stream/);
@@ -89,7 +89,7 @@ describe('run events', () => {
   });
 
   it('ends with cancelled when the run is cancelled, and lets go when the client leaves', async () => {
-    const run = await submit({ spec: 'grid:10x10', method: 'exact', timeLimitSeconds: 600 });
+    const run = await submit({ spec: 'grid:12x12', method: 'exact', timeLimitSeconds: 600 });
     const leaving = new AbortController();
     const first = await open(run.id, owner, leaving.signal);
     await readEvents(first, (e) => e.event === 'progress');
@@ -106,7 +106,7 @@ describe('run events', () => {
     const { events, ended } = await reading;
     expect(ended).toBe(true);
     expect(events[events.length - 1]!.event).toBe('cancelled');
-    expect((events[events.length - 1]!.data as RunView).result!.labels).toHaveLength(100);
+    expect((events[events.length - 1]!.data as RunView).result!.labels).toHaveLength(144);
   });
 
   it('is 404 for a private run of someone else and 401 without a key', async () => {

@@ -22,7 +22,7 @@ describe('EnginePool (real worker threads)', () => {
   it('reports progress and stops a search when cancelled, keeping the best interval', async () => {
     const controller = new AbortController();
     const seen: number[] = [];
-    const running = pool.run({ kind: 'solve', spec: 'grid:9x9', method: 'exact' }, { signal: controller.signal, onProgress: (p) => seen.push(p.lower) });
+    const running = pool.run({ kind: 'solve', spec: 'grid:12x12', method: 'exact' }, { signal: controller.signal, onProgress: (p) => seen.push(p.lower) });
     setTimeout(() => controller.abort(), 300);
     const result = await running;
     if (result.kind !== 'solve') throw new Error('expected a solve result');
@@ -30,7 +30,7 @@ describe('EnginePool (real worker threads)', () => {
     expect(result.solution.rankNumber).toBeNull();
     expect(result.solution.lower).toBeLessThan(result.solution.upper);
     expect(seen.length).toBeGreaterThan(0);
-    expect(verifyRanking(gridGraph(9, 9), result.solution.labels)).toMatchObject({ valid: true, maxLabel: result.solution.upper });
+    expect(verifyRanking(gridGraph(12, 12), result.solution.labels)).toMatchObject({ valid: true, maxLabel: result.solution.upper });
   });
 
   it('honours a time limit inside the worker', async () => {
@@ -45,8 +45,8 @@ describe('EnginePool (real worker threads)', () => {
       // The second search waits about 1.5 s behind the first: counted from its queueing, the pool would
       // stop it (aborted) 0.3 s into its own 1.5 s limit.
       const [first, second] = await Promise.all([
-        one.run({ kind: 'solve', spec: 'grid:10x10', method: 'exact', timeLimitMs: 1500 }),
-        one.run({ kind: 'solve', spec: 'grid:10x10', method: 'exact', timeLimitMs: 1500 }),
+        one.run({ kind: 'solve', spec: 'grid:12x12', method: 'exact', timeLimitMs: 1500 }),
+        one.run({ kind: 'solve', spec: 'grid:12x12', method: 'exact', timeLimitMs: 1500 }),
       ]);
       for (const r of [first, second]) {
         if (r.kind !== 'solve') throw new Error('expected a solve result');
