@@ -95,7 +95,8 @@ describe('exactTreeDepth', () => {
   // contained 2 x n grid, never falls as n grows (χr never grows on subgraphs), grows by at most the rows
   // count per added column (removing a vertex lowers χr by at most one); on the shorter rows the search
   // branching over single tops (a second method) agrees, and on 4 x n the four-row doubling construction
-  // (a ranking built without search past 16 cells) uses exactly as many labels.
+  // (a ranking built without search past 16 cells) uses exactly as many labels. Where a closed form
+  // applies (none of these rows has one yet), the search equals it.
   it('settles every 3 x n grid with n <= 30 and 4 x n with n <= 24, consistently with the 2 x n closed form, a second method and the four-row doubling', () => {
     const doubling = new FourRowDoubling();
     for (const rows of [3, 4]) {
@@ -110,6 +111,9 @@ describe('exactTreeDepth', () => {
         expect(r.upper, what).toBeGreaterThanOrEqual(previous);
         expect(r.upper - previous, what).toBeLessThanOrEqual(rows);
         if (rows === 4) expect(doubling.value(n), what).toBe(r.upper);
+        // Once `formulas` states a closed form for the row, the search must meet it on every n here.
+        const form = formulaFor(g);
+        if (form) expect(r.upper, `${what} against ${form.provenance}`).toBe(form.value);
         if (n <= (rows === 3 ? 18 : 10)) expect(treeDepthOf(new TreeDepthSearch(g, {}, 'vertex'), g), `${what} by single tops`).toBe(r.upper);
         previous = r.upper;
       }
