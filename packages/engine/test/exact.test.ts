@@ -7,10 +7,12 @@ import {
   exactTreeDepth,
   formulaFor,
   FourRowDoubling,
+  graphFromEdges,
   gridGraph,
   maskGraph,
   pathGraph,
   randomGraph,
+  randomTree,
   seededRandom,
   verifyRanking,
   type Graph,
@@ -78,6 +80,37 @@ describe('exactTreeDepth', () => {
       const n = 6 + (seed % 11);
       const g = randomGraph(n, [0.15, 0.3, 0.5][seed % 3]!, seed);
       expectExact(g, bruteForceTreeDepth(g), `G(${n}) seed ${seed}`);
+    }
+  });
+
+  // Sparse graphs are full of leaves and twins, the tops the search passes over for a neighbour that
+  // does at least as well: the values must not move.
+  it('equals the brute force on sparse random graphs, random trees and graphs with twin vertices', () => {
+    for (let seed = 1; seed <= 100; seed++) {
+      const n = 8 + (seed % 9);
+      const g = randomGraph(n, (1 + (seed % 3) * 0.5) / n, 500 + seed);
+      expectExact(g, bruteForceTreeDepth(g), `sparse G(${n}) seed ${500 + seed}`);
+    }
+    for (let seed = 1; seed <= 60; seed++) {
+      const g = randomTree(4 + (seed % 13), 700 + seed);
+      expectExact(g, bruteForceTreeDepth(g), `tree seed ${700 + seed}`);
+    }
+    for (let seed = 1; seed <= 40; seed++) {
+      // A random graph on 8 vertices, then copies of some: a copy has the same neighbours, and half the
+      // copies are also joined to their original (false and true twins).
+      const base = randomGraph(8, 0.35, 900 + seed);
+      const rand = seededRandom(900 + seed);
+      const pairs: number[] = [];
+      for (let v = 0; v < 8; v++) for (const w of base.neighbours(v)) if (v < w) pairs.push(v, w);
+      let n = 8;
+      for (let v = 0; v < 8 && n < 16; v++) {
+        if (rand() < 0.5) continue;
+        const copy = n++;
+        for (const w of base.neighbours(v)) pairs.push(copy, w);
+        if (rand() < 0.5) pairs.push(copy, v);
+      }
+      const g = graphFromEdges(n, pairs);
+      expectExact(g, bruteForceTreeDepth(g), `twins seed ${900 + seed}`);
     }
   });
 

@@ -1,5 +1,5 @@
 import { floorLog2, grid2RankNumber } from '../formulas/closed-forms';
-import { Bitset } from '../graph/bitset';
+import { Bitset, popcount32 } from '../graph/bitset';
 import type { Graph } from '../graph/graph';
 import { CutVertices } from './cut-vertices';
 import { SearchStopped } from './search-stop';
@@ -88,6 +88,9 @@ export class TreeDepthSearch {
     this.rest = new Bitset(this.n);
     this.frontier = new Bitset(this.n);
     this.grown = new Bitset(this.n);
+    this.degreeIn = new Int32Array(this.n);
+    this.near = new Bitset(this.n);
+    this.reach = new Bitset(this.n);
     this.cuts = new CutVertices(g.offsets, g.targets);
     this.canon = ShapeCanon.applies(g) ? new ShapeCanon(g) : undefined;
     this.separators = this.canon && branching === 'auto' ? new GridSeparators(this.canon) : undefined;
@@ -111,6 +114,10 @@ export class TreeDepthSearch {
   private readonly frontier: Bitset;
   private readonly grown: Bitset;
   private readonly cuts: CutVertices;
+  /** Scratch of dominatedTops: degrees in the set, a vertex's neighbours in it, and those within two steps. */
+  private readonly degreeIn: Int32Array;
+  private readonly near: Bitset;
+  private readonly reach: Bitset;
   /** General graphs: minor-min-width of a set, never below its degeneracy (grid shapes need neither). */
   private readonly minorMinWidth: SetMinorMinWidth | undefined;
 
@@ -325,9 +332,11 @@ export class TreeDepthSearch {
     }
     // Which tops leave C in one piece: those need no component search (most cells of a grid shape).
     const cut = this.cuts.find(c, c.first(), new Bitset(this.n));
+    const passed = this.canon ? undefined : this.dominatedTops(c);
     for (let i = 0; i < tops.length; i++) {
       const v = tops[i]!;
       if (!win && !c.has(v)) continue;
+      if (passed?.has(v)) continue;
       rest.delete(v);
       const fits = cut.has(v) ? this.atMost(rest, k - 1) : this.connectedAtMost(rest, k - 1);
       rest.add(v);
@@ -336,6 +345,54 @@ export class TreeDepthSearch {
     memo.setLower(e, k + 1);
     this.noteIfRectangle(e, c);
     return false;
+  }
+
+  /**
+   * The vertices of a connected set C that need not be tried as its top: v, when some u of C has
+   * N_C(v) − u ⊆ N_C(u). Then C − u is a subgraph of C − v (u's place taken by v: every edge of v in C − u
+   * goes to a neighbour of u), so td(C − u) ≤ td(C − v) as td never grows on subgraphs, and u does at least
+   * as well on top. u must come later in the order by degree in C, then lower index (its degree is never
+   * below v's), so a vertex passed over always leads to one that is tried. Leaves are the common case.
+   */
+  private dominatedTops(c: Bitset): Bitset {
+    const passed = new Bitset(this.n); // per call: the search below the caller's loop makes its own
+    const cw = c.words;
+    const words = cw.length;
+    const degree = this.degreeIn;
+    c.forEach((v) => {
+      const aw = this.adj[v]!.words;
+      let d = 0;
+      for (let i = 0; i < words; i++) d += popcount32(aw[i]! & cw[i]!);
+      degree[v] = d;
+    });
+    const nw = this.near.words;
+    const kw = this.reach.words;
+    c.forEach((v) => {
+      const aw = this.adj[v]!.words;
+      for (let i = 0; i < words; i++) nw[i] = aw[i]! & cw[i]!;
+      // Every candidate u is v's neighbour or a neighbour of one (v has a neighbour: C is connected).
+      kw.set(nw);
+      this.near.forEach((x) => this.reach.orWith(this.adj[x]!));
+      for (let i = 0; i < words; i++) kw[i]! &= cw[i]!;
+      this.reach.delete(v);
+      const dv = degree[v]!;
+      for (let i = 0; i < words && !passed.has(v); i++) {
+        for (let bits = kw[i]!; bits !== 0; bits &= bits - 1) {
+          const u = 32 * i + 31 - Math.clz32(bits & -bits);
+          const du = degree[u]!;
+          if (du < dv || (du === dv && u > v)) continue;
+          // N_C(v) − u ⊆ N(u): no word of N_C(v) has a bit outside N(u) but u's own.
+          const uw = this.adj[u]!.words;
+          let outside = 0;
+          for (let j = 0; j < words && outside === 0; j++) outside = nw[j]! & ~uw[j]! & (j === u >>> 5 ? ~(1 << (u & 31)) : -1);
+          if (outside === 0) {
+            passed.add(v);
+            break;
+          }
+        }
+      }
+    });
+    return passed;
   }
 
   /**
