@@ -349,7 +349,7 @@ export class TreeDepthSearch {
 
   /**
    * The vertices of a connected set C that need not be tried as its top: v, when some u of C has
-   * N_C(v) − u ⊆ N_C(u). Then C − u is a subgraph of C − v (u's place taken by v: every edge of v in C − u
+   * N_C(v) − u ⊆ N_C(u). Then C − u is a subgraph of C − v (u standing in for v: every edge of v in C − u
    * goes to a neighbour of u), so td(C − u) ≤ td(C − v) as td never grows on subgraphs, and u does at least
    * as well on top. u must come later in the order by degree in C, then lower index (its degree is never
    * below v's), so a vertex passed over always leads to one that is tried. Leaves are the common case.
