@@ -67,3 +67,67 @@ describe('full rectangles inside a shape', () => {
     }
   });
 });
+
+describe('separator rectangles', () => {
+  // The list written out plainly: every rectangle of the set's bounding box with its slack
+  // k - value(R) + |R \ set| (capped at maxSize), kept when below maxSize and no other rectangle inside it
+  // has slack as small, the tightest first and of equal slack the smallest, at most 256.
+  function plainly(rows: number, cols: number, present: (r: number, c: number) => boolean, box: number[], k: number, value: (h: number, w: number) => number, maxSize: number): number[][] {
+    const [top, bottom, left, right] = box as [number, number, number, number];
+    const all: number[][] = [];
+    for (let h = 1; h <= bottom - top + 1; h++) {
+      for (let w = 1; w <= right - left + 1; w++) {
+        for (let r = top; r + h - 1 <= bottom; r++) {
+          for (let c = left; c + w - 1 <= right; c++) {
+            let missing = 0;
+            for (let y = r; y < r + h; y++) for (let x = c; x < c + w; x++) if (!present(y, x)) missing++;
+            all.push([r, r + h - 1, c, c + w - 1, Math.min(maxSize, k - value(h, w) + missing)]);
+          }
+        }
+      }
+    }
+    const inside = (a: number[], b: number[]) => a !== b && a[0]! >= b[0]! && a[1]! <= b[1]! && a[2]! >= b[2]! && a[3]! <= b[3]!;
+    const kept = all.filter((q) => q[4]! < maxSize && !all.some((p) => inside(p, q) && p[4]! <= q[4]!));
+    const area = (q: number[]) => (q[1]! - q[0]! + 1) * (q[3]! - q[2]! + 1);
+    // Array.prototype.sort is stable, so ties keep the order of generation, as the engine's counting sort does.
+    return kept.sort((a, b) => a[4]! - b[4]! || area(a) - area(b)).slice(0, 256).map((q) => q.slice(0, 5));
+  }
+
+  it('are the plainly computed list on 62 random masks and value tables, for several label budgets', () => {
+    const rand = seededRandom(41);
+    // Any table of values will do for the list's definition: a random one meets more ties and nestings.
+    const table = Array.from({ length: 16 * 16 }, () => 1 + Math.floor(rand() * 6));
+    const randomValue = (h: number, w: number) => table[16 * h + w]!;
+    // Values growing with both sides (the larger rectangle the tighter) leave far more than 256 unimplied.
+    const growingValue = (h: number, w: number) => h + w - 1;
+    let listed = 0;
+    let longest = 0;
+    // The last two are larger, so that more than the 256 kept qualify.
+    for (let trial = 0; trial < 62; trial++) {
+      const rows = trial < 60 ? 3 + Math.floor(rand() * 5) : 10;
+      const cols = trial < 60 ? 3 + Math.floor(rand() * 6) : 11;
+      const present = new Uint8Array(rows * cols).map(() => (rand() < 0.85 ? 1 : 0));
+      present[0] = 1;
+      const g = maskGraph({ rows, cols, present });
+      const { cells } = g.layout!;
+      const canon = new ShapeCanon(g);
+      const value = trial < 60 ? randomValue : growingValue;
+      const set = Bitset.full(g.vertexCount);
+      const rowsOf = Array.from(cells, (p) => Math.floor(p / cols));
+      const colsOf = Array.from(cells, (p) => p % cols);
+      const box = [Math.min(...rowsOf), Math.max(...rowsOf), Math.min(...colsOf), Math.max(...colsOf)];
+      // The search asks only for budgets at or above the rectangle bound (no slack below zero).
+      const bound = Math.max(...plainly(rows, cols, (r, c) => present[r * cols + c] === 1, box, 0, value, 1000).map((q) => -q[4]!));
+      for (const k of trial < 60 ? [bound, bound + 2, bound + 5] : [bound + 3]) {
+        const maxSize = k - 1;
+        const got = canon.separatorRectangles(set, k, value, maxSize);
+        const chunks = Array.from({ length: got.length / 5 }, (_, i) => Array.from(got.subarray(5 * i, 5 * i + 5)));
+        expect(chunks, `trial ${trial}, k = ${k}`).toEqual(plainly(rows, cols, (r, c) => present[r * cols + c] === 1, box, k, value, maxSize));
+        listed += chunks.length;
+        longest = Math.max(longest, chunks.length);
+      }
+    }
+    expect(listed).toBeGreaterThan(1000);
+    expect(longest).toBe(256); // the cap was reached, and cut in the right place
+  });
+});

@@ -41,8 +41,9 @@ export class ShapeCanon {
   private prefix = new Int32Array(0);
   /** Scratch of separatorRectangles: for each rectangle, the least slack of one inside it. */
   private slackTable = new Int32Array(0);
-  /** Scratch of separatorRectangles: the rectangles no smaller one implies. */
+  /** Scratch of separatorRectangles: the rectangles no smaller one implies, and the counting sort's places. */
   private foundTable = new Int32Array(0);
+  private placeTable = new Int32Array(0);
   /** What the last canonicalKey found: [symmetry, r0, c0, h, w]. */
   readonly lastFrame = new Int32Array(5);
 
@@ -247,7 +248,8 @@ export class ShapeCanon {
    * slack = k - value(R) + |R \ set| cells outside R. Returned as [r0, r1, c0, c1, slack] quintuples in grid
    * coordinates, only those with slack below maxSize (the others cannot bind), leaving out those that a
    * smaller rectangle inside, with no more slack, already implies, and of those the SEPARATOR_RECTANGLES
-   * tightest.
+   * tightest (of equal slack the smaller, then in order of size and position). k must be at least the
+   * rectangle bound of the set, so that no slack is below zero: the search asks only then.
    */
   separatorRectangles(set: Bitset, k: number, value: (h: number, w: number) => number, maxSize: number): Int32Array {
     const { r0, c0, H, W, stride, prefix } = this.prefixCounts(set);
@@ -256,7 +258,9 @@ export class ShapeCanon {
     const size = H * H * W * W;
     if (this.slackTable.length < size) this.slackTable = new Int32Array(size);
     const least = this.slackTable;
-    const at = (top: number, bottom: number, left: number, right: number) => ((top * H + bottom) * W + left) * W + right;
+    // least[((top * H + bottom) * W + left) * W + right]: one row or column less is a fixed step away.
+    const downStep = H * W * W;
+    const upStep = W * W;
     // The candidates as [r0, r1, c0, c1, slack] in found, with order keys slack * (H * W + 1) + area.
     const rectangles = ((H * (H + 1)) / 2) * ((W * (W + 1)) / 2);
     if (this.foundTable.length < 5 * rectangles) this.foundTable = new Int32Array(5 * rectangles);
@@ -264,24 +268,37 @@ export class ShapeCanon {
     let count = 0;
     for (let h = 1; h <= H; h++) {
       for (let w = 1; w <= W; w++) {
-        const full = value(h, w);
+        const base = k - value(h, w) + h * w;
         for (let r = 0; r + h <= H; r++) {
-          for (let c = 0; c + w <= W; c++) {
-            const inside = prefix[(r + h) * stride + c + w]! - prefix[r * stride + c + w]! - prefix[(r + h) * stride + c]! + prefix[r * stride + c]!;
-            const s = Math.min(maxSize, k - full + (h * w - inside));
-            const b = r + h - 1;
-            const e = c + w - 1;
+          const b = r + h - 1;
+          const topRow = r * stride;
+          const bottomRow = (r + h) * stride;
+          let at = (r * H + b) * W * W + w - 1;
+          for (let c = 0; c + w <= W; c++, at += W + 1) {
+            const inside = prefix[bottomRow + c + w]! - prefix[topRow + c + w]! - prefix[bottomRow + c]! + prefix[topRow + c]!;
+            let s = base - inside;
+            if (s > maxSize) s = maxSize;
             let inner = maxSize;
-            if (h > 1) inner = Math.min(inner, least[at(r + 1, b, c, e)]!, least[at(r, b - 1, c, e)]!);
-            if (w > 1) inner = Math.min(inner, least[at(r, b, c + 1, e)]!, least[at(r, b, c, e - 1)]!);
-            least[at(r, b, c, e)] = Math.min(s, inner);
+            if (h > 1) {
+              const lower = least[at + downStep]!;
+              const upper = least[at - upStep]!;
+              if (lower < inner) inner = lower;
+              if (upper < inner) inner = upper;
+            }
+            if (w > 1) {
+              const right = least[at + W]!;
+              const leftward = least[at - 1]!;
+              if (right < inner) inner = right;
+              if (leftward < inner) inner = leftward;
+            }
+            least[at] = s < inner ? s : inner;
             // A rectangle inside with no more slack implies this one; those with maxSize cannot bind.
             if (s >= inner) continue;
             const q = 5 * count++;
             found[q] = r + r0;
             found[q + 1] = b + r0;
             found[q + 2] = c + c0;
-            found[q + 3] = e + c0;
+            found[q + 3] = c + w - 1 + c0;
             found[q + 4] = s;
           }
         }
@@ -290,7 +307,9 @@ export class ShapeCanon {
     // The tightest first, and of equal slack the smallest: a counting sort by key, cut at the cap.
     const keyOf = (q: number) => found[q + 4]! * (H * W + 1) + (found[q + 1]! - found[q]! + 1) * (found[q + 3]! - found[q + 2]! + 1);
     const keys = maxSize * (H * W + 1);
-    const place = new Int32Array(keys + 1);
+    if (this.placeTable.length < keys + 1) this.placeTable = new Int32Array(keys + 1);
+    const place = this.placeTable;
+    place.fill(0, 0, keys + 1);
     for (let i = 0; i < count; i++) place[keyOf(5 * i) + 1]!++;
     for (let key = 0; key < keys; key++) place[key + 1]! += place[key]!;
     const kept = Math.min(count, SEPARATOR_RECTANGLES);
@@ -298,7 +317,8 @@ export class ShapeCanon {
     for (let i = 0; i < count; i++) {
       const q = 5 * i;
       const to = place[keyOf(q)]!++;
-      if (to < kept) out.set(found.subarray(q, q + 5), 5 * to);
+      if (to >= kept) continue;
+      for (let j = 0; j < 5; j++) out[5 * to + j] = found[q + j]!;
     }
     return out;
   }
