@@ -129,6 +129,9 @@ describe('reading the atlas', () => {
     const page = await api<AtlasList>(h, 'GET', '/api/v1/atlas?family=grid&limit=2');
     expect(page.body).toMatchObject({ total: 3, nextOffset: 2 });
     expect((await api<AtlasList>(h, 'GET', '/api/v1/atlas?family=grid&limit=2&offset=2')).body.entries.map((e) => e.graphKey)).toEqual(['grid:9x11']);
+    // A page past the end still says how many there are; a filter matching nothing says 0.
+    expect((await api<AtlasList>(h, 'GET', '/api/v1/atlas?family=grid&limit=2&offset=5')).body).toEqual({ entries: [], total: 3, nextOffset: null });
+    expect((await api<AtlasList>(h, 'GET', '/api/v1/atlas?family=grid&rows=7')).body).toEqual({ entries: [], total: 0, nextOffset: null });
   });
 
   it('names a proving run only to readers who may open it (its owner, an admin, anyone once it is public)', async () => {

@@ -88,16 +88,19 @@ export async function listAtlas(source: DataSource, q: AtlasQuery, reader: Atlas
   if (q.colsTo !== undefined) where.push(`${size('cols')} <= ${param(q.colsTo)}`);
   if (q.exact !== undefined) where.push(`exact = ${param(q.exact)}`);
   const filter = where.length ? `WHERE ${where.join(' AND ')}` : '';
-  const [{ total }] = (await preparedRows<{ total: number }>(source, `SELECT count(*)::int AS total FROM atlas_entries ${filter}`, params)) as [{ total: number }];
+  const countText = `SELECT count(*)::int AS total FROM atlas_entries ${filter}`;
+  const countParams = params.slice();
   // Prepared statements: the texts come from the filter's shape alone (values are parameters), so
-  // there are a bounded number of them, and the atlas is the most read page.
-  const rowsFound = await preparedRows<AtlasRow>(
+  // there are a bounded number of them, and the atlas is the most read page. The page and the count of
+  // all matches come in one round trip (a window count); only a page past the end asks for the count alone.
+  const rowsFound = await preparedRows<AtlasRow & { total: number }>(
     source,
-    `SELECT ${entryColumns(param(reader.userId), param(reader.seesEveryRun))} FROM atlas_entries a ${filter}
+    `SELECT ${entryColumns(param(reader.userId), param(reader.seesEveryRun))}, count(*) OVER ()::int AS total FROM atlas_entries a ${filter}
      ORDER BY family, ${size('rows')} NULLS LAST, ${size('cols')} NULLS LAST, vertex_count, graph_key
      LIMIT ${param(q.limit)} OFFSET ${param(q.offset)}`,
     params,
   );
+  const total = rowsFound.length > 0 ? rowsFound[0]!.total : ((await preparedRows<{ total: number }>(source, countText, countParams)) as [{ total: number }])[0].total;
   const next = q.offset + rowsFound.length;
   return { entries: rowsFound.map(toView), total, nextOffset: next < total ? next : null };
 }
