@@ -88,11 +88,11 @@ export async function listAtlas(source: DataSource, q: AtlasQuery, reader: Atlas
   if (q.colsTo !== undefined) where.push(`${size('cols')} <= ${param(q.colsTo)}`);
   if (q.exact !== undefined) where.push(`exact = ${param(q.exact)}`);
   const filter = where.length ? `WHERE ${where.join(' AND ')}` : '';
-  const countText = `SELECT count(*)::int AS total FROM atlas_entries ${filter}`;
-  const countParams = params.slice();
+  const countParams = params.slice(); // the filter's values alone, for a page past the end
   // Prepared statements: the texts come from the filter's shape alone (values are parameters), so
   // there are a bounded number of them, and the atlas is the most read page. The page and the count of
-  // all matches come in one round trip (a window count); only a page past the end asks for the count alone.
+  // all matches come in one round trip (a window count); only a page past the end asks for the count alone
+  // (an empty first page means nothing matches).
   const rowsFound = await preparedRows<AtlasRow & { total: number }>(
     source,
     `SELECT ${entryColumns(param(reader.userId), param(reader.seesEveryRun))}, count(*) OVER ()::int AS total FROM atlas_entries a ${filter}
@@ -100,7 +100,8 @@ export async function listAtlas(source: DataSource, q: AtlasQuery, reader: Atlas
      LIMIT ${param(q.limit)} OFFSET ${param(q.offset)}`,
     params,
   );
-  const total = rowsFound.length > 0 ? rowsFound[0]!.total : ((await preparedRows<{ total: number }>(source, countText, countParams)) as [{ total: number }])[0].total;
+  const countAlone = async () => ((await preparedRows<{ total: number }>(source, `SELECT count(*)::int AS total FROM atlas_entries ${filter}`, countParams)) as [{ total: number }])[0].total;
+  const total = rowsFound.length > 0 ? rowsFound[0]!.total : q.offset === 0 ? 0 : await countAlone();
   const next = q.offset + rowsFound.length;
   return { entries: rowsFound.map(toView), total, nextOffset: next < total ? next : null };
 }
