@@ -132,7 +132,8 @@ export class GridSeparators {
     const outMask = new Int32Array(cells * lanes);
     const bounds = new Int32Array(4 * m); // each rectangle in padded-box coordinates
     const tight = new Int32Array(4 * (maxSize + 2)); // the tight box [r0, r1, c0, c1] at each path length
-    tight.set([0, H - 1, 0, W - 1]);
+    tight[1] = H - 1;
+    tight[3] = W - 1;
     // A cell lies outside a rectangle when its row or its column does: masks by row and by column first.
     const byRow = new Int32Array(H * lanes);
     const byCol = new Int32Array(W * lanes);

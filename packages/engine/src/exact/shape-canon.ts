@@ -257,8 +257,8 @@ export class ShapeCanon {
     // included; sizes come in increasing order, so those one row or column smaller are filled in already.
     const size = H * H * W * W;
     if (this.slackTable.length < size) this.slackTable = new Int32Array(size);
-    const least = this.slackTable;
-    // least[((top * H + bottom) * W + left) * W + right]: one row or column less is a fixed step away.
+    const leastInside = this.slackTable;
+    // leastInside[((top * H + bottom) * W + left) * W + right]: one row or column less is a fixed step away.
     const downStep = H * W * W;
     const upStep = W * W;
     // The candidates as [r0, r1, c0, c1, slack] in found, with order keys slack * (H * W + 1) + area.
@@ -280,18 +280,18 @@ export class ShapeCanon {
             if (s > maxSize) s = maxSize;
             let inner = maxSize;
             if (h > 1) {
-              const lower = least[at + downStep]!;
-              const upper = least[at - upStep]!;
+              const lower = leastInside[at + downStep]!;
+              const upper = leastInside[at - upStep]!;
               if (lower < inner) inner = lower;
               if (upper < inner) inner = upper;
             }
             if (w > 1) {
-              const right = least[at + W]!;
-              const leftward = least[at - 1]!;
+              const right = leastInside[at + W]!;
+              const leftward = leastInside[at - 1]!;
               if (right < inner) inner = right;
               if (leftward < inner) inner = leftward;
             }
-            least[at] = s < inner ? s : inner;
+            leastInside[at] = s < inner ? s : inner;
             // A rectangle inside with no more slack implies this one; those with maxSize cannot bind.
             if (s >= inner) continue;
             const q = 5 * count++;
