@@ -25,45 +25,10 @@ function largestPiece(g: Graph): number[] {
 }
 
 /**
- * Every inclusion-minimal separator of the connected cell set, by brute force over all subsets: X is one
- * exactly when at least two components of the rest have X as their whole neighbourhood (common practice:
- * the full-component characterisation).
- */
-function minimalSeparators(g: Graph, cells: number[]): string[] {
-  const out: string[] = [];
-  const inSet = new Map(cells.map((v, i) => [v, i]));
-  for (let mask = 1; mask < (1 << cells.length) - 1; mask++) {
-    const removed = (v: number) => (mask >> inSet.get(v)!) & 1;
-    const label = new Map<number, number>();
-    let full = 0;
-    for (const s of cells) {
-      if (removed(s) || label.has(s)) continue;
-      const piece = [s];
-      label.set(s, s);
-      const touched = new Set<number>();
-      for (let i = 0; i < piece.length; i++) {
-        for (const w of g.neighbours(piece[i]!)) {
-          if (!inSet.has(w)) continue;
-          if (removed(w)) touched.add(w);
-          else if (!label.has(w)) {
-            label.set(w, s);
-            piece.push(w);
-          }
-        }
-      }
-      let size = 0;
-      for (let i = 0; i < cells.length; i++) size += (mask >> i) & 1;
-      if (touched.size === size) full++;
-    }
-    if (full >= 2) out.push(cells.filter((v) => removed(v)).sort((a, b) => a - b).join(','));
-  }
-  return out;
-}
-
-/**
- * The minimal separators of at most `cap` vertices, all taken from `among` (at most 30 of them), of a
- * connected graph of at most 60 vertices, by brute force over subsets as two-word bitmasks (the same
- * full-component characterisation as above).
+ * The inclusion-minimal separators of at most `cap` vertices, all taken from `among` (at most 30 of them,
+ * within one piece of a graph of at most 60 vertices), by brute force over subsets as two-word bitmasks:
+ * X is one exactly when at least two components of the rest have X as their whole neighbourhood (common
+ * practice: the full-component characterisation). Other pieces of the graph touch no X, so never count.
  */
 function smallMinimalSeparators(g: Graph, cap: number, among = Array.from({ length: g.vertexCount }, (_, v) => v)): string[] {
   const n = g.vertexCount;
@@ -200,7 +165,7 @@ describe('GridSeparators', () => {
       const cells = largestPiece(g);
       if (cells.length < 3 || cells.length > 15) continue;
       const seen = listed(g, cells, 5);
-      for (const x of minimalSeparators(g, cells).filter((s) => s.split(',').length <= 5)) {
+      for (const x of smallMinimalSeparators(g, 5, cells)) {
         expect(seen.has(x), `seed ${seed}: separator {${x}}`).toBe(true);
         separators++;
       }
@@ -213,7 +178,7 @@ describe('GridSeparators', () => {
       for (let n = m; m * n <= 15; n++) {
         const g = gridGraph(m, n);
         const cells = Array.from({ length: m * n }, (_, v) => v);
-        const all = minimalSeparators(g, cells);
+        const all = smallMinimalSeparators(g, 5, cells);
         const seen = listed(g, cells, 5);
         for (const x of all.filter((s) => s.split(',').length <= 5)) expect(seen.has(x), `${m}x${n}: {${x}}`).toBe(true);
         const small = listed(g, cells, 3);
@@ -232,7 +197,7 @@ describe('GridSeparators', () => {
     const fits = (x: number[]) => x.every((v) => col(v) >= 1 && col(v) <= 3) && x.filter((v) => col(v) > 2).length <= 1;
     const seen = listed(g, cells, 5, rectangles);
     for (const x of seen) expect(fits(x.split(',').map(Number))).toBe(true);
-    const wanted = minimalSeparators(g, cells).filter((x) => x.split(',').length <= 5 && fits(x.split(',').map(Number)));
+    const wanted = smallMinimalSeparators(g, 5, cells).filter((x) => fits(x.split(',').map(Number)));
     expect(wanted.length).toBeGreaterThan(3);
     for (const x of wanted) expect(seen.has(x), `{${x}}`).toBe(true);
   });
