@@ -1,4 +1,4 @@
-import { execFile } from 'node:child_process';
+import { execFile, spawn } from 'node:child_process';
 import { mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
@@ -21,6 +21,19 @@ function cairn(args: string[], input?: string): Promise<{ code: number; stdout: 
 }
 
 describe('the cairn command', () => {
+  it('ends quietly when its reader goes away (a pipe into head or true), with no stack trace', async () => {
+    // The reader closes its end at once, before the command has printed anything.
+    for (const args of [['solve', 'grid:6x6'], ['sweep', 'grid', '--rows', '1..3', '--cols', '1..30', '--format', 'csv', '--quiet']]) {
+      const child = spawn(process.execPath, [bin, ...args], { cwd: work });
+      let stderr = '';
+      child.stderr.on('data', (d) => (stderr += String(d)));
+      child.stdout.destroy();
+      const code = await new Promise<number | null>((resolve) => child.on('close', (c) => resolve(c)));
+      expect(stderr, args.join(' ')).not.toMatch(/EPIPE|\n\s+at /);
+      expect(code, args.join(' ')).toBe(0);
+    }
+  });
+
   it('solve --json: the closed forms for the cycle (Bodlaender et al. 1998) and the 2 x n grid (Alpert 2010), labels verified again', async () => {
     for (const [spec, value] of [['cycle:20', 6], ['grid:2x9', 6], ['path:1000', 10]] as const) {
       const { code, stdout } = await cairn(['solve', spec, '--json', '--quiet']);
